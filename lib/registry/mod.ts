@@ -1,0 +1,87 @@
+/**
+ * The sourced reference-data registry: load once, validate, freeze, hash, query.
+ *
+ * @example
+ * ```ts
+ * import { registry } from "./mod.ts";
+ * if (registry.hash.length !== 64) throw new Error("hash");
+ * if (!registry.source("iapws-r6-95").citation.includes("IAPWS")) throw new Error("source");
+ * ```
+ *
+ * @module
+ */
+import { type LoadedRegistry, loadRegistry } from "./load.ts";
+import { coreQueries } from "./core.ts";
+import { pipeQueries } from "./q_pipes.ts";
+import { materialQueries } from "./q_materials.ts";
+import { liquidQueries } from "./q_liquids.ts";
+import { fittingQueries } from "./q_fittings.ts";
+
+export { canonicalJson, loadRegistry, MAX_DATA_FILE_BYTES } from "./load.ts";
+export type { DataDoc, LoadedRegistry } from "./load.ts";
+export { nearest } from "./nearest.ts";
+
+/**
+ * Build the query object over loaded data.
+ *
+ * @param loaded data from {@link loadRegistry}
+ * @returns the registry: hash, sources, pipes, materials, liquids, fittings, tables
+ *
+ * @example
+ * ```ts
+ * import { createRegistry, loadRegistry } from "./mod.ts";
+ * const reg = createRegistry(loadRegistry(new URL("../../data/", import.meta.url)));
+ * if (reg.sources().length < 1) throw new Error("sources");
+ * ```
+ */
+export function createRegistry(loaded: LoadedRegistry) {
+  return Object.freeze({
+    ...coreQueries(loaded),
+    ...pipeQueries(loaded),
+    ...materialQueries(loaded),
+    ...liquidQueries(loaded),
+    ...fittingQueries(loaded),
+  });
+}
+
+/** The registry's query object. */
+export type Registry = ReturnType<typeof createRegistry>;
+
+/** The bundled data folder. */
+export const DATA_DIR: URL = new URL("../../data/", import.meta.url);
+
+let cached: Registry | undefined;
+
+/**
+ * The bundled registry, loaded from data/ on first use and then frozen.
+ *
+ * @returns the registry
+ *
+ * @example
+ * ```ts
+ * import { defaultRegistry } from "./mod.ts";
+ * if (defaultRegistry() !== defaultRegistry()) throw new Error("loaded once");
+ * ```
+ */
+export function defaultRegistry(): Registry {
+  return cached ??= createRegistry(loadRegistry(DATA_DIR));
+}
+
+/**
+ * The bundled registry as a constant; it loads on first property access.
+ */
+export const registry: Registry = new Proxy({} as Registry, {
+  get(_t, key) {
+    return Reflect.get(defaultRegistry(), key);
+  },
+  has(_t, key) {
+    return Reflect.has(defaultRegistry(), key);
+  },
+  ownKeys() {
+    return Reflect.ownKeys(defaultRegistry());
+  },
+  getOwnPropertyDescriptor(_t, key) {
+    const d = Reflect.getOwnPropertyDescriptor(defaultRegistry(), key);
+    return d ? { ...d, configurable: true } : undefined;
+  },
+});

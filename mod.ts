@@ -1,0 +1,16 @@
+/**
+ * snellpath: plan, mount and audit clamp-on transit-time ultrasonic flow meters on
+ * liquid-filled pipes. This module only re-exports.
+ *
+ * @example
+ * ```ts
+ * import { registry } from "./mod.ts";
+ * if (registry.hash.length !== 64) throw new Error("registry hash");
+ * ```
+ *
+ * @module
+ */
+export * from "./lib/errors.ts";
+export * from "./lib/units.ts";
+export * from "./lib/trace.ts";
+export * from "./lib/registry/mod.ts";

@@ -1,0 +1,108 @@
+/**
+ * Shared command-line conventions for every script: `--help`, `--json`, `--debug`, one-line
+ * errors on stderr, exit 2 for bad input, 1 for no physical answer, 0 for success.
+ *
+ * @module
+ */
+import { parseArgs, type ParseArgsConfig } from "node:util";
+import { InputError, SnellpathError } from "../lib/errors.ts";
+
+/** Option spec as `node:util` `parseArgs` takes it. */
+export type OptionSpec = NonNullable<ParseArgsConfig["options"]>;
+
+/** Options every script accepts. */
+export const COMMON_OPTIONS: OptionSpec = {
+  help: { type: "boolean", short: "h" },
+  json: { type: "boolean" },
+  debug: { type: "boolean" },
+};
+
+/**
+ * Parse arguments strictly; print help and exit 0 on `--help`.
+ *
+ * @param args the arguments (Deno.args)
+ * @param options the script's options (the common ones are added)
+ * @param help the help text
+ * @returns parsed values and positionals
+ */
+export function parseCli(
+  args: string[],
+  options: OptionSpec,
+  help: string,
+): { values: Record<string, string | boolean | string[] | undefined>; positionals: string[] } {
+  let parsed;
+  try {
+    parsed = parseArgs({
+      args,
+      options: { ...COMMON_OPTIONS, ...options },
+      allowPositionals: true,
+      strict: true,
+    });
+  } catch (e) {
+    const msg = e instanceof Error ? e.message.split("\n")[0] : String(e);
+    throw new InputError("arguments", msg.replace(/\.$/, ""), "the options listed by --help");
+  }
+  if (parsed.values.help) {
+    console.log(help.trim());
+    Deno.exit(0);
+  }
+  return parsed as {
+    values: Record<string, string | boolean | string[] | undefined>;
+    positionals: string[];
+  };
+}
+
+/**
+ * Run a script's main function: catch every error at the edge and print one line.
+ * Exit 2 for bad input, 1 for no physical answer or an internal fault, 0 on success.
+ * `--debug` prints the stack as well.
+ *
+ * @param main the script body; returns an exit code or nothing for 0
+ */
+export async function runMain(main: () => Promise<number | void> | number | void): Promise<void> {
+  const debug = Deno.args.includes("--debug");
+  let code = 0;
+  try {
+    code = (await main()) ?? 0;
+  } catch (e) {
+    if (e instanceof SnellpathError) {
+      console.error(`error: ${e.message}`);
+      code = e.exitCode;
+    } else if (e instanceof Deno.errors.NotFound) {
+      console.error(`error: ${firstLine(e)}`);
+      code = 2;
+    } else if (e instanceof Deno.errors.NotCapable || e instanceof Deno.errors.PermissionDenied) {
+      console.error(`error: not permitted: ${firstLine(e)}`);
+      code = 2;
+    } else {
+      console.error(`error: internal fault: ${firstLine(e)} (run with --debug for details)`);
+      code = 1;
+    }
+    if (debug && e instanceof Error) console.error(e.stack);
+  }
+  Deno.exit(code);
+}
+
+function firstLine(e: unknown): string {
+  return (e instanceof Error ? e.message : String(e)).split("\n")[0];
+}
+
+/**
+ * Read a required string option or throw an {@link InputError} naming it.
+ *
+ * @param values parsed values
+ * @param name option name without dashes
+ * @param accepted what is accepted, for the message
+ * @returns the option's value
+ */
+export function requireOption(
+  values: Record<string, unknown>,
+  name: string,
+  accepted: string,
+): string {
+  const v = values[name];
+  if (typeof v !== "string" || v.trim() === "") {
+    throw new InputError(`--${name}`, v === undefined ? "nothing" : JSON.stringify(v), accepted);
+  }
+  return v;
+}

@@ -1,0 +1,47 @@
+/**
+ * Small assertions on top of node:assert/strict (JSR's @std/assert is unreachable here).
+ *
+ * @module
+ */
+import assert from "node:assert/strict";
+export { assert };
+export const { equal, deepEqual, ok, throws, rejects, notEqual, match } = assert;
+
+/**
+ * Assert |actual − expected| ≤ tol·|expected| (relative) and return the relative difference.
+ *
+ * @param actual computed value
+ * @param expected reference value
+ * @param relTol relative tolerance
+ * @param what label for the message
+ * @returns the relative difference
+ */
+export function closeRel(actual: number, expected: number, relTol: number, what = ""): number {
+  assert.ok(Number.isFinite(actual), `${what}: computed ${actual} is not finite`);
+  const rel = expected === 0 ? Math.abs(actual) : Math.abs(actual - expected) / Math.abs(expected);
+  assert.ok(
+    rel <= relTol,
+    `${what}: computed ${actual}, expected ${expected}, relative difference ${
+      rel.toExponential(3)
+    } > ${relTol}`,
+  );
+  return rel;
+}
+
+/**
+ * Assert |actual − expected| ≤ tol (absolute).
+ *
+ * @param actual computed value
+ * @param expected reference value
+ * @param absTol absolute tolerance
+ * @param what label for the message
+ */
+export function closeAbs(actual: number, expected: number, absTol: number, what = ""): void {
+  assert.ok(Number.isFinite(actual), `${what}: computed ${actual} is not finite`);
+  assert.ok(
+    Math.abs(actual - expected) <= absTol,
+    `${what}: computed ${actual}, expected ${expected}, difference ${
+      Math.abs(actual - expected)
+    } > ${absTol}`,
+  );
+}
