@@ -14,3 +14,5 @@ export * from "./lib/errors.ts";
 export * from "./lib/units.ts";
 export * from "./lib/trace.ts";
 export * from "./lib/registry/mod.ts";
+export * from "./lib/pipe/mod.ts";
+export * from "./lib/water/mod.ts";

@@ -496,3 +496,33 @@ function describe(v: unknown): string {
   if (typeof v === "object") return "an object";
   return `${typeof v} ${String(v)}`;
 }
+
+/**
+ * The fast table's contents, so the tests can check every entry against mathjs.
+ *
+ * @returns base units (with whether they take SI prefixes), the prefixes with their
+ *   factors, and the temperature, temperature-difference and gauge/absolute pressure units
+ *
+ * @example
+ * ```ts
+ * import { fastTable } from "./units.ts";
+ * const t = fastTable();
+ * if (!t.units.some((u) => u.unit === "m" && u.prefix)) throw new Error("m");
+ * if (!t.temperatures.includes("degF")) throw new Error("degF");
+ * ```
+ */
+export function fastTable(): {
+  units: { unit: string; prefix: boolean }[];
+  prefixes: { prefix: string; factor: number }[];
+  temperatures: string[];
+  temperatureDifferences: string[];
+  pressures: string[];
+} {
+  return {
+    units: Object.entries(UNITS).map(([unit, u]) => ({ unit, prefix: u.prefix === true })),
+    prefixes: Object.entries(PREFIXES).map(([prefix, factor]) => ({ prefix, factor })),
+    temperatures: Object.keys(TEMPERATURES),
+    temperatureDifferences: Object.keys(TEMPERATURE_DIFFERENCES),
+    pressures: Object.keys(PRESSURES),
+  };
+}

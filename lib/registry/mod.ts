@@ -20,6 +20,14 @@ import { fittingQueries } from "./q_fittings.ts";
 export { canonicalJson, loadRegistry, MAX_DATA_FILE_BYTES } from "./load.ts";
 export type { DataDoc, LoadedRegistry } from "./load.ts";
 export { nearest } from "./nearest.ts";
+export type {
+  MaterialAttenuation,
+  MaterialBasis,
+  MaterialProperties,
+  MaterialQueries,
+  MaterialRole,
+  MaterialWaveMode,
+} from "./q_materials.ts";
 
 /**
  * Build the query object over loaded data.

@@ -1,0 +1,32 @@
+/**
+ * Registry load time (aim: under 50 ms for the whole data folder) and catalogue lookups.
+ */
+import { createRegistry, DATA_DIR, defaultRegistry, loadRegistry } from "../lib/registry/mod.ts";
+import { pipe } from "../lib/pipe/mod.ts";
+
+Deno.bench(
+  "registry: load, validate, hash the data folder",
+  { group: "load", baseline: true },
+  () => {
+    loadRegistry(DATA_DIR);
+  },
+);
+
+Deno.bench("registry: load and build the query object", { group: "load" }, () => {
+  createRegistry(loadRegistry(DATA_DIR));
+});
+
+const reg = defaultRegistry();
+
+Deno.bench("registry.pipe: B36.10M NPS 1-1/2 Sch 40 (text forms)", { group: "lookup" }, () => {
+  reg.pipe({ standard: "B36.10M", nps: "1 1/2", schedule: "sch40" });
+});
+
+Deno.bench("pipe(): measured circumference with lining", { group: "lookup" }, () => {
+  pipe({
+    circumference: 0.359,
+    wallThickness: 0.006,
+    material: "carbon-steel",
+    lining: { material: "cement-mortar", thickness: 0.008 },
+  }, { registry: reg });
+});

@@ -1,0 +1,41 @@
+/**
+ * Fully developed pipe flow: Reynolds number, Darcy friction factor, velocity profiles,
+ * profile factor and multi-chord weights. Re-exports only.
+ *
+ * @example
+ * ```ts
+ * import { profileFactor, reynoldsNumber } from "./mod.ts";
+ * const re = reynoldsNumber(1, 0.1, 1e-6);
+ * if (!(profileFactor(re) > 0.9 && profileFactor(re) < 0.96)) throw new Error();
+ * ```
+ *
+ * @module
+ */
+export { type FlowRegime, reynoldsNumber } from "./reynolds.ts";
+export { type FrictionMethod, frictionFactor, frictionFactorExplicit } from "./friction.ts";
+export {
+  type ChordRule,
+  type ChordWeights,
+  chordWeights,
+  gaussLegendre,
+  halfChordRule,
+  type HalfChordRule,
+} from "./quadrature.ts";
+export {
+  chordMeanVelocity,
+  flowRegime,
+  powerLawExponent,
+  powerLawExponentFromFriction,
+  profileFactor,
+  profileFactorEstimate,
+  type ProfileFactorEstimate,
+  profileFactorRange,
+  type ProfileFactorRange,
+  type ProfileModel,
+  type ProfileOptions,
+  profileShape,
+  type ProfileShape,
+  profileVelocity,
+  TURBULENT_MODELS,
+} from "./profile.ts";
+export { flowConstants, type FlowConstants } from "./constants.ts";

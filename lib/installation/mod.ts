@@ -1,0 +1,40 @@
+/**
+ * Installation effects: fittings and their straight-run requirements, the straight-run check,
+ * the distorted-profile model and the ranking of positions along a run. Re-exports only.
+ *
+ * @example
+ * ```ts
+ * import { checkStraightRun } from "./mod.ts";
+ * const r = checkStraightRun({ diameter: 0.1, upstream: { fitting: "elbow-90", distance: 0.6 } });
+ * if (r.verdict !== "short") throw new Error();
+ * ```
+ *
+ * @module
+ */
+export { type Fitting, resolveFitting } from "./fittings.ts";
+export {
+  checkStraightRun,
+  MARGINAL_FRACTION,
+  type StraightRunInput,
+  type StraightRunResult,
+  type StraightRunVerdict,
+} from "./straight_run.ts";
+export {
+  DEFAULT_FLUID_ANGLE,
+  type ErrorComponents,
+  MODEL_NOTE,
+  MODEL_RELATIVE_SPREAD,
+  type ProfileErrorInput,
+  profileErrorEstimate,
+  type ProfileErrorResult,
+  profileErrorSweep,
+  type SweepRow,
+} from "./model.ts";
+export {
+  DEFAULT_PATH_ORIENTATIONS,
+  type RankedPosition,
+  rankPositions,
+  type RankInput,
+  type RankResult,
+  SHORT_RUN_FRACTION,
+} from "./rank.ts";

@@ -1,0 +1,267 @@
+/**
+ * The snellpath distorted-profile model: the reading shift of a clamp-on transit-time path
+ * behind a fitting.
+ *
+ * Velocity field (normalised by the bulk velocity V, radius R = 1, polar angle θ measured in
+ * the section from the fitting's reference plane, x the axial distance from the fitting in D):
+ *
+ *   u = u_fd(r) + A(x)(1 − r²)(1 − 3r²) + B(x) r²(1 − r²) cos 2θ + S(x) r(1 − r²) cos θ
+ *   tangential (swirl) w_θ = W(x) r (1 − r⁴);  cross-flow along the reference plane C(x)(1 − r²)
+ *
+ * where u_fd is the fully developed profile (lib/flow) and each amplitude decays as
+ * a₀ exp(−x/L) with a₀, L per fitting (data/fittings.yaml). Each axial term has zero area
+ * mean, so V stays 1. The acoustic path is followed chord by chord: traverse k runs along a
+ * chord at offset h (0 on the diameter), successive traverses reflected at the wall (on the
+ * diameter, back along the same line: the V and W paths cross the section in the same plane in
+ * opposite directions); every point sits at its own axial distance, the path advancing
+ * √(1 − h²)·tan φ diameters per traverse (φ the beam angle in the liquid from the wall normal).
+ * The path sees u + v_t·cot φ, v_t the in-section velocity along its direction; the meter
+ * turns the path mean into a bulk velocity with the fully developed profile factor of the same
+ * chord. The relative error is that reading over V, minus 1.
+ *
+ * Consequences, tested: a diametral path is blind to swirl (solid-body rotation projects to
+ * zero along any diameter) and to the skewed component; an off-centre chord is not; V and W
+ * paths cancel the cross-flow a Z path sees; errors decay with distance.
+ *
+ * It is an estimate from a simple model, not a calibration: every result says so.
+ *
+ * @module
+ */
+import { InputError, requireFinite } from "../errors.ts";
+import { halfChordRule } from "../flow/quadrature.ts";
+import {
+  chordMeanVelocity,
+  type ProfileModel,
+  profileShape,
+  type ProfileShape,
+} from "../flow/profile.ts";
+import { type Fitting, resolveFitting } from "./fittings.ts";
+
+/** Default beam angle in the liquid from the wall normal, rad (20°, common practice). */
+export const DEFAULT_FLUID_ANGLE = 20 * Math.PI / 180;
+
+/** Judgement on the model: the spread reported is this fraction of the estimated error. */
+export const MODEL_RELATIVE_SPREAD = 0.5;
+
+/** The note every model result carries. */
+export const MODEL_NOTE = "estimate from the snellpath distorted-profile model (simple, " +
+  "exponentially decaying components; only the single-elbow terms are fitted to published " +
+  "magnitudes); not a calibration";
+
+const RULE = halfChordRule(24);
+
+/** Input of {@link profileErrorEstimate}. */
+export interface ProfileErrorInput {
+  /** Axial distance from the fitting to the middle of the acoustic path, in diameters (≥ 0). */
+  readonly distanceDiameters: number;
+  /** Upstream fitting id or entry. */
+  readonly fitting: string | Fitting;
+  /** Angle from the fitting's reference plane to the path plane, rad; default 0. */
+  readonly orientation?: number;
+  /** Bore crossings: 1 (Z), 2 (V), 4 (W), any integer 1–8; default 2. */
+  readonly traverses?: number;
+  /** Reynolds number; default 1e5. */
+  readonly reynolds?: number;
+  /** Chord offset h/R in [0, 1), default 0 (diametral, the clamp-on case). */
+  readonly chordOffset?: number;
+  /** Beam angle in the liquid from the wall normal, rad, in (0, 1.4); default 20°. */
+  readonly fluidAngle?: number;
+  /** Fully developed profile model; default power-law-nikuradse. */
+  readonly model?: ProfileModel;
+  /** Relative roughness ε/D; default 0. */
+  readonly relativeRoughness?: number;
+}
+
+/** Contribution of each model component to the relative error. */
+export interface ErrorComponents {
+  readonly axisymmetric: number;
+  readonly secondHarmonic: number;
+  readonly skew: number;
+  readonly swirl: number;
+  readonly crossFlow: number;
+}
+
+/** Result of {@link profileErrorEstimate}. */
+export interface ProfileErrorResult {
+  /** Estimated relative error of the reading (reading/true − 1); negative reads low. */
+  readonly error: number;
+  /** Half-width of the model's own uncertainty on `error` (judgement: 50 % of it). */
+  readonly spread: number;
+  /** Per component. */
+  readonly components: ErrorComponents;
+  /** Fully developed profile factor the meter applies. */
+  readonly profileFactor: number;
+  readonly fitting: string;
+  readonly distanceDiameters: number;
+  readonly orientation: number;
+  readonly traverses: number;
+  readonly reynolds: number;
+  readonly note: string;
+}
+
+function amp(c: { amplitude: number; decay: number }, x: number): number {
+  return c.amplitude === 0 ? 0 : c.amplitude * Math.exp(-Math.max(x, 0) / c.decay);
+}
+
+/**
+ * Estimated relative error of a clamp-on transit-time reading at a distance behind a fitting,
+ * by the snellpath distorted-profile model (see the module text). Sources: model parameters
+ * in data/fittings.yaml (`synowiec-2021` for the single elbow's magnitudes,
+ * `snellpath-installation-model` otherwise, basis recalled); profiles from lib/flow.
+ *
+ * Validity: distance ≥ 0 D (the model is meant from about 1 D on; nearer, it extrapolates a
+ * smooth decay into the fitting's own flow), traverses 1–8, Re as lib/flow, h/R in [0, 1).
+ *
+ * @param input distance (D), fitting, orientation (rad), traverses, Re, chord offset, beam angle
+ * @returns error, spread, components, profile factor used, and a note that it is an estimate
+ *
+ * @example
+ * ```ts
+ * import { profileErrorEstimate } from "./model.ts";
+ * const near = profileErrorEstimate({ distanceDiameters: 2, fitting: "elbow-90" });
+ * const far = profileErrorEstimate({ distanceDiameters: 20, fitting: "elbow-90" });
+ * if (!(near.error < 0 && Math.abs(far.error) < Math.abs(near.error))) throw new Error();
+ * ```
+ */
+export function profileErrorEstimate(input: ProfileErrorInput): ProfileErrorResult {
+  const fit = resolveFitting(input.fitting);
+  const x0 = requireFinite("distanceDiameters", input.distanceDiameters, "D");
+  if (x0 < 0) {
+    throw new InputError("distanceDiameters", String(x0), "a distance ≥ 0 D from the fitting");
+  }
+  const alpha = requireFinite("orientation", input.orientation ?? 0, "rad");
+  const nTrav = input.traverses ?? 2;
+  if (!Number.isInteger(nTrav) || nTrav < 1 || nTrav > 8) {
+    throw new InputError("traverses", String(nTrav), "an integer from 1 to 8 (1 Z, 2 V, 4 W)");
+  }
+  const re = requireFinite("reynolds", input.reynolds ?? 1e5, "1", true);
+  const h = requireFinite("chordOffset", input.chordOffset ?? 0, "1");
+  if (h < 0 || h >= 1) throw new InputError("chordOffset", String(h), "h/R from 0 up to 1");
+  const phi = requireFinite("fluidAngle", input.fluidAngle ?? DEFAULT_FLUID_ANGLE, "rad");
+  if (!(phi > 0 && phi < 1.4)) {
+    throw new InputError("fluidAngle", String(phi), "a beam angle in the liquid in (0, 1.4) rad");
+  }
+  const shape: ProfileShape = profileShape(re, {
+    model: input.model,
+    relativeRoughness: input.relativeRoughness,
+    extrapolate: true,
+  });
+  const k = 1 / chordMeanVelocity(shape, h);
+  const comp = pathIntegral(fit, x0, alpha, nTrav, h, phi);
+  const components: ErrorComponents = Object.freeze({
+    axisymmetric: k * comp[0],
+    secondHarmonic: k * comp[1],
+    skew: k * comp[2],
+    swirl: k * comp[3],
+    crossFlow: k * comp[4],
+  });
+  const error = components.axisymmetric + components.secondHarmonic + components.skew +
+    components.swirl + components.crossFlow;
+  return Object.freeze({
+    error,
+    spread: MODEL_RELATIVE_SPREAD * Math.abs(error),
+    components,
+    profileFactor: k,
+    fitting: fit.id,
+    distanceDiameters: x0,
+    orientation: alpha,
+    traverses: nTrav,
+    reynolds: re,
+    note: MODEL_NOTE,
+  });
+}
+
+const OUT = new Float64Array(5);
+
+/** Path means of the five distortion terms (already multiplied out by the transverse cot φ). */
+function pathIntegral(
+  fit: Fitting,
+  xMid: number,
+  alpha: number,
+  nTrav: number,
+  h: number,
+  phi: number,
+): Float64Array {
+  OUT.fill(0);
+  const dist = fit.disturbance;
+  const g = Math.sqrt(1 - h * h);
+  const step = g * Math.tan(phi); // axial advance per traverse, D
+  const cot = 1 / Math.tan(phi);
+  const gamma = Math.acos(h);
+  const xStart = xMid - nTrav * step / 2;
+  const { s, w } = RULE;
+  for (let kk = 0; kk < nTrav; kk++) {
+    const beta = alpha - Math.PI / 2 + 2 * kk * gamma; // chord normal angle
+    const nx = Math.cos(beta);
+    const ny = Math.sin(beta);
+    const ex = -ny; // travel direction: normal turned +90°
+    const ey = nx;
+    for (let i = 0; i < s.length; i++) {
+      for (let side = -1; side <= 1; side += 2) {
+        const t = side * s[i];
+        const px = h * nx + t * g * ex;
+        const py = h * ny + t * g * ey;
+        const r2 = px * px + py * py;
+        const om = 1 - r2;
+        const x = xStart + step * (kk + (t + 1) / 2);
+        const wt = w[i] / 2 / nTrav;
+        OUT[0] += wt * amp(dist.axisymmetric, x) * om * (1 - 3 * r2);
+        OUT[1] += wt * amp(dist.secondHarmonic, x) * (px * px - py * py) * om;
+        OUT[2] += wt * amp(dist.skew, x) * px * om;
+        OUT[3] += wt * amp(dist.swirl, x) * h * (1 - r2 * r2) * cot;
+        OUT[4] += wt * amp(dist.crossFlow, x) * om * ex * cot;
+      }
+    }
+  }
+  return OUT;
+}
+
+/** One row of {@link profileErrorSweep}. */
+export interface SweepRow {
+  readonly distanceDiameters: number;
+  readonly orientation: number;
+  readonly reynolds: number;
+  readonly error: number;
+}
+
+/**
+ * {@link profileErrorEstimate} over a grid of distances, orientations and Reynolds numbers
+ * (for example the minimum, design and maximum flow of a site).
+ *
+ * @param base the fixed inputs (fitting, traverses, chord, beam angle, model)
+ * @param grid distances (D), orientations (rad, default [0]), Reynolds numbers (default [1e5])
+ * @returns one row per combination
+ *
+ * @example
+ * ```ts
+ * import { profileErrorSweep } from "./model.ts";
+ * const rows = profileErrorSweep({ fitting: "elbow-90" }, {
+ *   distances: [5, 10], reynolds: [2e4, 1e5, 5e5],
+ * });
+ * if (rows.length !== 6) throw new Error();
+ * ```
+ */
+export function profileErrorSweep(
+  base: Omit<ProfileErrorInput, "distanceDiameters" | "orientation" | "reynolds">,
+  grid: {
+    readonly distances: readonly number[];
+    readonly orientations?: readonly number[];
+    readonly reynolds?: readonly number[];
+  },
+): SweepRow[] {
+  const rows: SweepRow[] = [];
+  for (const d of grid.distances) {
+    for (const o of grid.orientations ?? [0]) {
+      for (const re of grid.reynolds ?? [1e5]) {
+        const r = profileErrorEstimate({
+          ...base,
+          distanceDiameters: d,
+          orientation: o,
+          reynolds: re,
+        });
+        rows.push({ distanceDiameters: d, orientation: o, reynolds: re, error: r.error });
+      }
+    }
+  }
+  return rows;
+}

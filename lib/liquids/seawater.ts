@@ -1,0 +1,373 @@
+/**
+ * Seawater: sound speed (TEOS-10 75-term polynomial, TEOS-10 Gibbs function, UNESCO 1983),
+ * density (TEOS-10 75-term) and viscosity (Sharqawy et al. 2010 ratio on IAPWS 2008 water).
+ *
+ * Inputs at the public edge are practical salinity S_P (PSS-78), temperature in K (ITS-90) and
+ * absolute pressure in Pa. TEOS-10 needs absolute salinity: the reference salinity
+ * S_R = (35.16504/35)·S_P (Millero et al. 2008) is used for it (no regional anomaly), and
+ * conservative temperature Θ is computed from the in-situ temperature through the Gibbs function
+ * (see gibbs.ts).
+ *
+ * @module
+ */
+import { checkRange, InputError, NoPhysicalAnswerError, type ValidityOptions } from "../errors.ts";
+import { defaultRegistry } from "../registry/mod.ts";
+import { trace, type TraceEntry } from "../trace.ts";
+import { conservativeTemperature, densityGibbs, P0, soundSpeedGibbs, T0 } from "./gibbs.ts";
+import { soundSpeedUnesco1983 } from "./unesco.ts";
+
+/** Seawater sound-speed formulations. */
+export type SeawaterFormulation = "teos10" | "teos10-gibbs" | "unesco1983";
+
+/** Reference-salinity factor u_PS = 35.16504/35 g/kg (Millero et al. 2008). */
+export const UPS = 35.16504 / 35;
+
+interface V75 {
+  i: Int8Array;
+  j: Int8Array;
+  k: Int8Array;
+  v: Float64Array;
+  Su: number;
+  dS: number;
+}
+let v75: V75 | undefined;
+
+function load(): V75 {
+  if (v75) return v75;
+  const d = defaultRegistry().coefficients("seawater-teos10-75term");
+  const rows = d.coefficients.v as number[][];
+  const sso = d.constants.SSO as number;
+  v75 = {
+    i: Int8Array.from(rows.map((r) => r[0])),
+    j: Int8Array.from(rows.map((r) => r[1])),
+    k: Int8Array.from(rows.map((r) => r[2])),
+    v: Float64Array.from(rows.map((r) => r[3])),
+    Su: 40 * sso / 35,
+    dS: d.constants.deltaS as number,
+  };
+  return v75;
+}
+
+const ps = new Float64Array(8);
+const pt = new Float64Array(8);
+const pz = new Float64Array(8);
+const res = new Float64Array(2);
+
+/** v and ∂v/∂ζ of the 75-term polynomial, into `res`. SA g/kg, CT °C, sea pressure dbar. */
+function v75eval(SAgkg: number, CT: number, pdbar: number): Float64Array {
+  const c = load();
+  const s = Math.sqrt((SAgkg + c.dS) / c.Su);
+  const tau = CT / 40;
+  const z = pdbar * 1e-4;
+  ps[0] = pt[0] = pz[0] = 1;
+  for (let n = 1; n < 8; n++) {
+    ps[n] = ps[n - 1] * s;
+    pt[n] = pt[n - 1] * tau;
+    pz[n] = pz[n - 1] * z;
+  }
+  let v = 0, dv = 0;
+  for (let n = 0; n < c.v.length; n++) {
+    const k = c.k[n];
+    const a = c.v[n] * ps[c.i[n]] * pt[c.j[n]];
+    v += a * pz[k];
+    if (k > 0) dv += a * k * pz[k - 1];
+  }
+  res[0] = v;
+  res[1] = dv;
+  return res;
+}
+
+const NAME75 = "TEOS-10 75-term polynomial (Roquet et al. 2015)";
+const SA75: [number, number] = [0, 42];
+const CT75: [number, number] = [-3, 42.5]; // Θ of in-situ −2..40 °C over the S, p range
+const T75: [number, number] = [-2, 40];
+const P75: [number, number] = [0, 8000];
+
+function check75(SAgkg: number, CT: number, pdbar: number, options?: ValidityOptions): void {
+  checkRange("absolute salinity", SAgkg, SA75, "g/kg", NAME75, options);
+  checkRange("conservative temperature", CT, CT75, "degC", NAME75, options);
+  checkRange("sea pressure", pdbar, P75, "dbar", NAME75, options);
+  if (SAgkg < 0 || pdbar < -10) {
+    throw new InputError("salinity or pressure", `${SAgkg} g/kg, ${pdbar} dbar`, "S_A >= 0");
+  }
+}
+
+/**
+ * Specific volume of seawater by the TEOS-10 75-term polynomial of Roquet et al. (2015),
+ * v = Σ v_ijk s^i τ^j ζ^k with s = sqrt((S_A + 24 g/kg)/S_u), τ = Θ/40 °C, ζ = p_sea/10⁴ dbar.
+ *
+ * Validity: S_A 0–42 g/kg, Θ −2 to 40 °C, sea pressure 0–8000 dbar (throws OutOfRangeError
+ * outside unless extrapolate). Sources: roquet-2015, ioc-teos10-2010.
+ *
+ * @param SA absolute salinity, kg/kg
+ * @param CT conservative temperature, °C (TEOS-10 convention: a Celsius value)
+ * @param seaPressure sea pressure p − 101 325 Pa, Pa
+ * @param options extrapolation opt-in and warnings sink
+ * @returns specific volume, m³/kg
+ *
+ * @example
+ * ```ts
+ * import { specificVolume75 } from "./seawater.ts";
+ * const v = specificVolume75(0.035, 10, 1000e4);
+ * if (Math.abs(v - 9.696677509681e-4) > 1e-15) throw new Error(String(v));
+ * ```
+ */
+export function specificVolume75(
+  SA: number,
+  CT: number,
+  seaPressure: number,
+  options?: ValidityOptions,
+): number {
+  check75(SA * 1000, CT, seaPressure * 1e-4, options);
+  return v75eval(SA * 1000, CT, seaPressure * 1e-4)[0];
+}
+
+/**
+ * Sound speed of seawater from the TEOS-10 75-term specific volume: c = v·sqrt(−1/(∂v/∂p)) at
+ * constant S_A and Θ (Θ fixes entropy), as TEOS-10 defines it for the polynomial.
+ *
+ * Validity: S_A 0–42 g/kg, Θ −2 to 40 °C, sea pressure 0–8000 dbar. Sources: roquet-2015,
+ * ioc-teos10-2010.
+ *
+ * @param SA absolute salinity, kg/kg
+ * @param CT conservative temperature, °C
+ * @param seaPressure sea pressure p − 101 325 Pa, Pa
+ * @param options extrapolation opt-in and warnings sink
+ * @returns sound speed, m/s
+ *
+ * @example
+ * ```ts
+ * import { soundSpeed75 } from "./seawater.ts";
+ * const c = soundSpeed75(0.03516504, 10, 0);
+ * if (Math.abs(c - 1490.3) > 0.5) throw new Error(String(c));
+ * ```
+ */
+export function soundSpeed75(
+  SA: number,
+  CT: number,
+  seaPressure: number,
+  options?: ValidityOptions,
+): number {
+  check75(SA * 1000, CT, seaPressure * 1e-4, options);
+  const r = v75eval(SA * 1000, CT, seaPressure * 1e-4);
+  const dvdp = r[1] * 1e-8; // per Pa: ζ = p[dbar]/1e4, 1 dbar = 1e4 Pa
+  const c = r[0] * Math.sqrt(-1 / dvdp);
+  if (!Number.isFinite(c)) {
+    throw new NoPhysicalAnswerError(`75-term polynomial gives no sound speed at Θ ${CT} °C`);
+  }
+  return c;
+}
+
+const SP_RANGE: [number, number] = [0, 42 / UPS];
+
+function absoluteSalinity(S: number, options?: ValidityOptions): number {
+  if (!Number.isFinite(S) || S < 0) {
+    throw new InputError("salinity", String(S), "a practical salinity >= 0 (for example 35)");
+  }
+  checkRange("practical salinity", S, SP_RANGE, "", "TEOS-10", options);
+  return UPS * S / 1000;
+}
+
+/**
+ * Sound speed of seawater.
+ *
+ * - `"teos10"` (default): TEOS-10 75-term polynomial (Roquet et al. 2015) at Θ computed from T
+ *   by the Gibbs function, with S_A = S_R = (35.16504/35)·S (Millero et al. 2008).
+ * - `"teos10-gibbs"`: the full TEOS-10 Gibbs function (IAPWS-08 with SR7-09) at (S_A, T, p).
+ * - `"unesco1983"`: UNESCO 1983 (Fofonoff & Millard 1983; Chen & Millero 1977), t68 = 1.00024 t90.
+ *
+ * Validity: TEOS-10 S 0–41.8 (S_A ≤ 42 g/kg), −2 to 40 °C, sea pressure 0–80 MPa (Gibbs:
+ * −6 to 40 °C, 0–100 MPa); UNESCO 1983: S 0–40, 0–40 °C, 0–100 MPa sea pressure. Throws
+ * OutOfRangeError outside unless extrapolate. Sources: roquet-2015, ioc-teos10-2010,
+ * millero-2008, iapws-r13-08, iapws-sr7-09, fofonoff-millard-1983, chen-millero-1977.
+ *
+ * @param S practical salinity (PSS-78), dimensionless (35 for open ocean)
+ * @param T temperature, K (ITS-90)
+ * @param p absolute pressure, Pa (default 101 325)
+ * @param formulation "teos10" (default) | "teos10-gibbs" | "unesco1983"
+ * @param options extrapolation opt-in and warnings sink
+ * @returns sound speed, m/s
+ *
+ * @example
+ * ```ts
+ * import { seawater } from "./seawater.ts";
+ * const c = seawater.soundSpeed(35, 283.15);
+ * const u = seawater.soundSpeed(35, 283.15, 101325, "unesco1983");
+ * if (Math.abs(c - u) > 0.5) throw new Error(`${c} ${u}`);
+ * ```
+ */
+function soundSpeed(
+  S: number,
+  T: number,
+  p: number = P0,
+  formulation: SeawaterFormulation = "teos10",
+  options?: ValidityOptions,
+): number {
+  switch (formulation) {
+    case "teos10": {
+      const SA = absoluteSalinity(S, options);
+      checkRange("temperature", T, [T0 + T75[0], T0 + T75[1]], "K", NAME75, options);
+      const CT = conservativeTemperature(SA, T, p, options);
+      return soundSpeed75(SA, CT, p - P0, options);
+    }
+    case "teos10-gibbs":
+      return soundSpeedGibbs(absoluteSalinity(S, options), T, p, options);
+    case "unesco1983":
+      return soundSpeedUnesco1983(S, T, p, options);
+    default:
+      throw new InputError(
+        "formulation",
+        JSON.stringify(formulation),
+        "teos10, teos10-gibbs or unesco1983",
+      );
+  }
+}
+
+/**
+ * Density of seawater: TEOS-10 75-term polynomial, ρ = 1/v(S_A, Θ, p), with Θ from T by the
+ * Gibbs function and S_A = (35.16504/35)·S; or the full Gibbs function with `"teos10-gibbs"`.
+ *
+ * Validity: as {@link seawater.soundSpeed}. Sources: roquet-2015, ioc-teos10-2010,
+ * millero-2008.
+ *
+ * @param S practical salinity, dimensionless
+ * @param T temperature, K (ITS-90)
+ * @param p absolute pressure, Pa (default 101 325)
+ * @param formulation "teos10" (default) | "teos10-gibbs"
+ * @param options extrapolation opt-in and warnings sink
+ * @returns density, kg/m³
+ *
+ * @example
+ * ```ts
+ * import { seawater } from "./seawater.ts";
+ * const rho = seawater.density(35, 288.15);
+ * if (Math.abs(rho - 1026.0) > 0.2) throw new Error(String(rho));
+ * ```
+ */
+function density(
+  S: number,
+  T: number,
+  p: number = P0,
+  formulation: "teos10" | "teos10-gibbs" = "teos10",
+  options?: ValidityOptions,
+): number {
+  const SA = absoluteSalinity(S, options);
+  if (formulation === "teos10-gibbs") return densityGibbs(SA, T, p, options);
+  if (formulation !== "teos10") {
+    throw new InputError("formulation", JSON.stringify(formulation), "teos10 or teos10-gibbs");
+  }
+  checkRange("temperature", T, [T0 + T75[0], T0 + T75[1]], "K", NAME75, options);
+  const CT = conservativeTemperature(SA, T, p, options);
+  return 1 / specificVolume75(SA, CT, p - P0, options);
+}
+
+let visc: { A: number[]; B: number[]; u: number } | undefined;
+
+/**
+ * Dynamic viscosity of seawater: μ = μ_w(T, p)·(1 + A·s + B·s²), s the salinity as a mass fraction
+ * (taken as S_R = (35.16504/35)·S/1000), A and B quadratic in t (°C), Sharqawy et al. (2010)
+ * eq. 22; μ_w is pure water by IAPWS 2008 (passed in by the caller so this room does not depend on
+ * the water room's loading order). Stated accuracy ±1.5 %.
+ *
+ * Validity: s 0–0.15 kg/kg, 0–180 °C (throws OutOfRangeError outside unless extrapolate).
+ * Sources: sharqawy-2010, iapws-r12-08.
+ *
+ * @param S practical salinity, dimensionless
+ * @param T temperature, K
+ * @param waterViscosity viscosity of pure water at the same T and p, Pa·s
+ * @param options extrapolation opt-in and warnings sink
+ * @returns dynamic viscosity, Pa·s
+ *
+ * @example
+ * ```ts
+ * import { seawater } from "./seawater.ts";
+ * const mu = seawater.viscosityFromWater(35, 293.15, 1.0016e-3);
+ * if (Math.abs(mu / 1.0016e-3 - 1.0817) > 0.005) throw new Error(String(mu));
+ * ```
+ */
+function viscosityFromWater(
+  S: number,
+  T: number,
+  waterViscosity: number,
+  options?: ValidityOptions,
+): number {
+  if (!visc) {
+    const d = defaultRegistry().coefficients("seawater-sharqawy2010-viscosity");
+    visc = {
+      A: d.coefficients.A as number[],
+      B: d.coefficients.B as number[],
+      u: d.constants.relativeUncertainty as number,
+    };
+  }
+  if (!Number.isFinite(S) || S < 0) {
+    throw new InputError("salinity", String(S), "a practical salinity >= 0");
+  }
+  const s = UPS * S / 1000;
+  const name = "Sharqawy et al. 2010 seawater viscosity";
+  checkRange("salinity mass fraction", s, [0, 0.15], "kg/kg", name, options);
+  checkRange("temperature", T, [T0, T0 + 180], "K", name, options);
+  const t = T - T0;
+  const A = visc.A[0] + visc.A[1] * t + visc.A[2] * t * t;
+  const B = visc.B[0] + visc.B[1] * t + visc.B[2] * t * t;
+  return waterViscosity * (1 + A * s + B * s * s);
+}
+
+/**
+ * Trace entries for a seawater sound speed: formulation, sources, basis.
+ *
+ * @param formulation the formulation used
+ * @returns trace entries
+ *
+ * @example
+ * ```ts
+ * import { seawaterTrace } from "./seawater.ts";
+ * if (seawaterTrace("teos10")[0].source !== "roquet-2015") throw new Error();
+ * ```
+ */
+export function seawaterTrace(formulation: SeawaterFormulation): TraceEntry[] {
+  switch (formulation) {
+    case "teos10":
+      return [
+        trace("formulation: TEOS-10 75-term sound speed", "teos10", "", "roquet-2015", "transcribed"),
+        trace("conservative temperature: TEOS-10 Gibbs function", "Θ", "", "ioc-teos10-2010", "transcribed"),
+        trace("absolute salinity = (35.16504/35) S_P", UPS, "", "millero-2008", "transcribed"),
+      ];
+    case "teos10-gibbs":
+      return [
+        trace("formulation: TEOS-10 Gibbs function sound speed", "teos10-gibbs", "", "iapws-r13-08", "transcribed"),
+        trace("pure-water part: IAPWS SR7-09", "SR7-09", "", "iapws-sr7-09", "transcribed"),
+        trace("absolute salinity = (35.16504/35) S_P", UPS, "", "millero-2008", "transcribed"),
+      ];
+    case "unesco1983":
+      return [
+        trace("formulation: UNESCO 1983 sound speed", "unesco1983", "", "fofonoff-millard-1983", "transcribed"),
+        trace("t68 = 1.00024 t90", 1.00024, "", "saunders-1990", "transcribed"),
+      ];
+  }
+}
+
+/** Seawater formulations by name, with their sources. */
+export const seawaterFormulations: Readonly<Record<SeawaterFormulation, readonly string[]>> =
+  Object.freeze({
+    "teos10": ["roquet-2015", "ioc-teos10-2010", "millero-2008"],
+    "teos10-gibbs": ["iapws-r13-08", "iapws-sr7-09", "ioc-teos10-2010"],
+    "unesco1983": ["fofonoff-millard-1983", "chen-millero-1977"],
+  });
+
+/**
+ * Seawater properties: `soundSpeed(S, T, p?, formulation?, options?)`, `density(S, T, p?, …)`,
+ * `viscosityFromWater(S, T, μ_w, options?)`, and the formulations list. Salinity is practical
+ * salinity, T in K, p absolute in Pa.
+ *
+ * @example
+ * ```ts
+ * import { seawater } from "./seawater.ts";
+ * if (!(seawater.soundSpeed(35, 293.15) > 1500)) throw new Error();
+ * ```
+ */
+export const seawater = Object.freeze({
+  soundSpeed,
+  density,
+  viscosityFromWater,
+  formulations: seawaterFormulations,
+});

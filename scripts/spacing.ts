@@ -1,0 +1,444 @@
+/**
+ * Transducer spacing per mounting, the Snell chain and the search window, from raw figures or
+ * catalogue terms. Run with --help.
+ *
+ * @module
+ */
+import { InputError } from "../lib/errors.ts";
+import { type Dimension, parseQuantity } from "../lib/units.ts";
+import {
+  type ClampOnInputs,
+  type ClampOnPath,
+  clampOnPath,
+  criticalAngles,
+  type LiningLayer,
+  PRIMARY_MODE_RULE,
+} from "../lib/acoustics/path.ts";
+import { searchWindow, type WindowUncertainties } from "../lib/acoustics/window.ts";
+import { type OptionSpec, parseCli, runMain } from "./_cli.ts";
+
+/** Geometry options shared by spacing.ts and transit.ts. */
+export const GEOMETRY_OPTIONS: OptionSpec = {
+  od: { type: "string" },
+  wall: { type: "string" },
+  "wall-speed": { type: "string" },
+  "wall-shear-speed": { type: "string" },
+  "wall-mode": { type: "string" },
+  "fluid-speed": { type: "string" },
+  "wedge-speed": { type: "string" },
+  "wedge-angle": { type: "string" },
+  "lining-thickness": { type: "string" },
+  "lining-speed": { type: "string" },
+  "element-height": { type: "string" },
+  "index-offset": { type: "string" },
+  standard: { type: "string" },
+  nps: { type: "string" },
+  schedule: { type: "string" },
+  material: { type: "string" },
+  liquid: { type: "string" },
+  temperature: { type: "string" },
+  pressure: { type: "string" },
+  "wedge-material": { type: "string" },
+};
+
+/** Help text of the geometry options. */
+export const GEOMETRY_HELP = `
+Raw figures (unit strings; all needed unless the catalogue supplies them):
+  --od "114.3 mm"            pipe outside diameter
+  --wall "6.02 mm"           wall thickness
+  --wall-speed "5920 m/s"    longitudinal speed of the wall
+  --wall-shear-speed "3230 m/s"  shear speed of the wall (lets the shear mode be considered)
+  --wall-mode auto|longitudinal|shear   force the wall mode (default auto)
+  --fluid-speed "1482 m/s"   sound speed of the liquid
+  --wedge-speed "2720 m/s"   sound speed of the wedge
+  --wedge-angle "38 deg"     beam angle in the wedge from the contact-face normal
+  --lining-thickness "8 mm[,2 mm]"  lining layer(s), wall side first
+  --lining-speed "4200 m/s[,2500 m/s]"
+  --element-height "10 mm"   element centre above the wedge face (adds wedge times)
+  --index-offset "12 mm"     index point to the housing's reference mark (adds mark distance)
+Catalogue terms (raw figures given as well override them):
+  --standard "ASME B36.10M" --nps 4 --schedule 40   pipe from the catalogue
+  --material carbon-steel    wall material (default: the catalogue's)
+  --liquid water             liquid (water by IAPWS-95; others where the liquids room has them)
+  --temperature "20 degC"    operating temperature (liquid and wedge)
+  --pressure "5 bar"         absolute pressure (default 1 atm)
+  --wedge-material acrylic   wedge material (speed at the temperature)
+`;
+
+/** Inputs resolved from the command line, with what the catalogue gave for the window. */
+export interface ResolvedGeometry {
+  /** Clamp-on inputs less the traverse count. */
+  readonly inputs: Omit<ClampOnInputs, "traverses">;
+  /** Uncertainties known from the catalogue (material spreads, tolerances), SI. */
+  readonly catalogueUncertainties: WindowUncertainties;
+  /** Where each figure came from, for the human output. */
+  readonly notes: readonly string[];
+}
+
+function q(values: Record<string, unknown>, name: string, dim: Dimension): number | undefined {
+  const v = values[name];
+  if (v === undefined) return undefined;
+  if (typeof v !== "string") throw new InputError(`--${name}`, String(v), "a value");
+  return parseQuantity(v, dim, `--${name}`);
+}
+
+function list(values: Record<string, unknown>, name: string, dim: Dimension): number[] | undefined {
+  const v = values[name];
+  if (v === undefined) return undefined;
+  if (typeof v !== "string" || v.trim() === "") {
+    throw new InputError(`--${name}`, JSON.stringify(v), "a comma-separated list of values");
+  }
+  return v.split(",").map((s) => parseQuantity(s.trim(), dim, `--${name}`));
+}
+
+function need(x: number | undefined, name: string, what: string): number {
+  if (x === undefined) {
+    throw new InputError(`--${name}`, "nothing", `${what} (or catalogue terms that supply it)`);
+  }
+  return x;
+}
+
+/**
+ * Resolve the geometry options: raw figures, completed from the catalogue when catalogue terms
+ * are given (registry, pipe and water modules are imported only then).
+ *
+ * @param values parsed option values
+ * @returns the clamp-on inputs (no traverses), catalogue uncertainties, notes
+ */
+export async function resolveGeometry(
+  values: Record<string, unknown>,
+): Promise<ResolvedGeometry> {
+  let od = q(values, "od", "length");
+  let wall = q(values, "wall", "length");
+  let cL = q(values, "wall-speed", "speed");
+  let cS = q(values, "wall-shear-speed", "speed");
+  let cf = q(values, "fluid-speed", "speed");
+  let cw = q(values, "wedge-speed", "speed");
+  const angle = q(values, "wedge-angle", "angle");
+  const lt = list(values, "lining-thickness", "length");
+  const ls = list(values, "lining-speed", "speed");
+  const notes: string[] = [];
+  const u: Record<string, unknown> = {};
+  let lining: LiningLayer[] | undefined;
+
+  const catalogue = ["standard", "nps", "schedule", "material", "liquid", "wedge-material"]
+    .some((k) => values[k] !== undefined);
+  if (catalogue) {
+    const T = q(values, "temperature", "temperature");
+    const p = q(values, "pressure", "pressure") ?? 101325;
+    const { registry } = await import("../lib/registry/mod.ts");
+    let material = typeof values.material === "string" ? values.material : undefined;
+    if (
+      values.standard !== undefined || values.nps !== undefined || values.schedule !== undefined
+    ) {
+      const { pipe } = await import("../lib/pipe/mod.ts");
+      const pp = pipe({
+        standard: String(values.standard ?? ""),
+        nps: String(values.nps ?? ""),
+        schedule: String(values.schedule ?? ""),
+      });
+      od ??= pp.outsideDiameter;
+      wall ??= pp.wallThickness;
+      material ??= pp.material;
+      notes.push(`pipe: ${pp.standard} NPS ${pp.nps} schedule ${pp.schedule} (catalogue)`);
+      const tw = pp.tolerances?.wallThickness;
+      if (tw && (tw.plus !== undefined || tw.minus !== undefined)) {
+        u.wallThickness = Math.max(tw.plus ?? 0, tw.minus ?? 0);
+      }
+      if (lt === undefined && pp.lining.length > 0) {
+        lining = pp.lining.map((l) => {
+          const m = registry.material(l.material);
+          return {
+            thickness: l.thickness,
+            soundSpeed: T === undefined
+              ? m.longitudinal
+              : registry.materialSpeedAt(l.material, T, "longitudinal"),
+          };
+        });
+        notes.push(`lining: ${pp.lining.map((l) => l.material).join(", ")} (catalogue)`);
+      }
+    }
+    if (material !== undefined) {
+      const m = registry.material(material);
+      cL ??= T === undefined
+        ? m.longitudinal
+        : registry.materialSpeedAt(material, T, "longitudinal");
+      if (m.shear !== undefined) {
+        cS ??= T === undefined ? m.shear : registry.materialSpeedAt(material, T, "shear");
+        if (m.shearSpread !== undefined) u.wallShearSpeed = m.shearSpread;
+      }
+      if (m.longitudinalSpread !== undefined) u.wallSoundSpeed = m.longitudinalSpread;
+      notes.push(`wall material: ${m.id} (${m.source}, ${m.basis})`);
+    }
+    if (typeof values["wedge-material"] === "string") {
+      const id = values["wedge-material"];
+      const m = registry.material(id);
+      cw ??= T === undefined ? m.longitudinal : registry.materialSpeedAt(id, T, "longitudinal");
+      if (m.longitudinalSpread !== undefined) u.wedgeSoundSpeed = m.longitudinalSpread;
+      notes.push(`wedge material: ${m.id} (${m.source}, ${m.basis})`);
+    }
+    if (typeof values.liquid === "string" && cf === undefined) {
+      const Tl = need(T, "temperature", "the operating temperature for the liquid");
+      if (values.liquid === "water") {
+        const { water } = await import("../lib/water/mod.ts");
+        cf = water.soundSpeed(Tl, p);
+        notes.push("liquid: water, IAPWS-95 (iapws-r6-95)");
+      } else {
+        const spec = "../lib/liquids/mod.ts";
+        // deno-lint-ignore no-explicit-any
+        let mod: any;
+        try {
+          mod = await import(spec);
+        } catch {
+          throw new InputError(
+            "--liquid",
+            values.liquid,
+            "water (other liquids are not available)",
+          );
+        }
+        const props = mod.liquidProperties(values.liquid, Tl, p);
+        cf = props.soundSpeed;
+        if (typeof props.soundSpeedSpread === "number") u.fluidSoundSpeed = props.soundSpeedSpread;
+        notes.push(`liquid: ${values.liquid} (liquids registry)`);
+      }
+    }
+  }
+  if (lt !== undefined || ls !== undefined) {
+    if (lt === undefined) {
+      throw new InputError("--lining-thickness", "nothing", "the lining thickness");
+    }
+    if (ls === undefined) {
+      throw new InputError("--lining-speed", "nothing", "the lining sound speed");
+    }
+    const speeds = ls;
+    if (lt.length !== speeds.length) {
+      throw new InputError(
+        "--lining-speed",
+        `${speeds.length} values`,
+        `${lt.length}, one per layer`,
+      );
+    }
+    lining = lt.map((x, i) => ({ thickness: x, soundSpeed: speeds[i] }));
+  }
+  const mode = values["wall-mode"];
+  if (mode !== undefined && mode !== "auto" && mode !== "longitudinal" && mode !== "shear") {
+    throw new InputError("--wall-mode", String(mode), "auto, longitudinal or shear");
+  }
+  const eh = q(values, "element-height", "length");
+  const io = q(values, "index-offset", "length");
+  return {
+    inputs: {
+      outsideDiameter: need(od, "od", "the outside diameter"),
+      wallThickness: need(wall, "wall", "the wall thickness"),
+      wallSoundSpeed: need(cL, "wall-speed", "the wall's longitudinal speed"),
+      wallShearSpeed: cS,
+      wallMode: mode as ClampOnInputs["wallMode"],
+      lining,
+      fluidSoundSpeed: need(cf, "fluid-speed", "the liquid's sound speed"),
+      wedgeSoundSpeed: need(cw, "wedge-speed", "the wedge's sound speed"),
+      wedgeAngle: need(angle, "wedge-angle", "the wedge angle"),
+      wedge: eh === undefined && io === undefined
+        ? undefined
+        : { elementHeight: eh, indexOffset: io },
+    },
+    catalogueUncertainties: u as WindowUncertainties,
+    notes,
+  };
+}
+
+/**
+ * Parse `--traverses` "1,2,4".
+ *
+ * @param v the option value
+ * @param fallback default list
+ * @returns traverse counts
+ */
+export function parseTraverses(v: unknown, fallback: number[]): number[] {
+  if (v === undefined) return fallback;
+  const out = String(v).split(",").map((s) => Number(s.trim()));
+  for (const n of out) {
+    if (!Number.isInteger(n) || n < 1 || n > 8) {
+      throw new InputError(
+        "--traverses",
+        JSON.stringify(v),
+        "whole numbers from 1 to 8, e.g. 1,2,4",
+      );
+    }
+  }
+  return out;
+}
+
+/** Trade name of a mounting by traverse count. */
+export function mountingName(n: number): string {
+  return n === 1 ? "Z" : n === 2 ? "V" : n === 4 ? "W" : `${n}-traverse`;
+}
+
+const HELP = `
+spacing — transducer spacing per mounting, the Snell chain and the search window
+
+Usage:
+  deno task spacing --od "114.3 mm" --wall "6.02 mm" --wall-speed "5920 m/s" \\
+    --wall-shear-speed "3230 m/s" --fluid-speed "1482 m/s" --wedge-speed "2720 m/s" \\
+    --wedge-angle "38 deg" --traverses 1,2,4
+  deno task spacing --standard "ASME B36.10M" --nps 4 --schedule 40 --liquid water \\
+    --temperature "20 degC" --wedge-material acrylic --wedge-angle "38 deg"
+${GEOMETRY_HELP}
+Mounting and window:
+  --traverses 1,2,4          crossings of the bore (1 Z, 2 V, 4 W; up to 8); default 2
+  --u-fluid-speed "10 m/s"   uncertainty of the liquid speed (search window)
+  --u-wall "0.6 mm"          uncertainty of the wall thickness
+  --u-wall-speed "50 m/s"    uncertainty of the wall speed (of the mode used)
+  --u-wedge-speed "20 m/s"   uncertainty of the wedge speed
+  --u-wedge-angle "0.5 deg"  uncertainty of the wedge angle
+  --u-wedge-temperature "5 K" --wedge-dcdt "-2.5 m/s/K"   wedge temperature and its dc/dT
+  --json                     machine-readable output
+  --debug                    stack traces on errors
+Exit: 0 ok, 2 bad input, 1 no physical answer (beyond a critical angle).
+Spacing is the axial distance between the beam's entry and exit points on the outer pipe
+surface. Check the figures on site before drilling, lifting lagging or working on hot or
+pressurised lines: follow local codes and your site's permit-to-work.
+`;
+
+const WINDOW_OPTIONS: OptionSpec = {
+  traverses: { type: "string" },
+  "u-fluid-speed": { type: "string" },
+  "u-wall": { type: "string" },
+  "u-wall-speed": { type: "string" },
+  "u-wedge-speed": { type: "string" },
+  "u-wedge-angle": { type: "string" },
+  "u-wedge-temperature": { type: "string" },
+  "wedge-dcdt": { type: "string" },
+};
+
+function mm(x: number | undefined, d = 2): string {
+  return x === undefined ? "—" : (x * 1000).toFixed(d);
+}
+function us(x: number | undefined): string {
+  return x === undefined ? "—" : (x * 1e6).toFixed(3);
+}
+function dg(x: number | undefined): string {
+  return x === undefined ? "—" : (x * 180 / Math.PI).toFixed(2);
+}
+
+async function main(): Promise<number> {
+  const { values } = parseCli(Deno.args, { ...GEOMETRY_OPTIONS, ...WINDOW_OPTIONS }, HELP);
+  const geo = await resolveGeometry(values);
+  const traverses = parseTraverses(values.traverses, [2]);
+  const paths: ClampOnPath[] = traverses.map((n) => clampOnPath({ ...geo.inputs, traverses: n }));
+  const crit = criticalAngles(geo.inputs);
+
+  const given: Record<string, number | undefined> = {
+    fluidSoundSpeed: q(values, "u-fluid-speed", "speed"),
+    wallThickness: q(values, "u-wall", "length"),
+    wedgeSoundSpeed: q(values, "u-wedge-speed", "speed"),
+    wedgeAngle: q(values, "u-wedge-angle", "angle"),
+  };
+  const uws = q(values, "u-wall-speed", "speed");
+  if (uws !== undefined) {
+    given[paths[0].wallMode === "shear" ? "wallShearSpeed" : "wallSoundSpeed"] = uws;
+  }
+  const unc: Record<string, unknown> = { ...geo.catalogueUncertainties };
+  for (const [k, v] of Object.entries(given)) if (v !== undefined) unc[k] = v;
+  const uT = q(values, "u-wedge-temperature", "temperatureDifference");
+  if (uT !== undefined) {
+    const dcdt = values["wedge-dcdt"];
+    if (typeof dcdt !== "string") {
+      throw new InputError("--wedge-dcdt", "nothing", 'the wedge\'s dc/dT, e.g. "-2.5 m/s/K"');
+    }
+    const m = dcdt.trim().match(/^([-+]?[0-9.eE+-]+)\s*m\/s\/K$/);
+    if (!m || !Number.isFinite(Number(m[1]))) {
+      throw new InputError(
+        "--wedge-dcdt",
+        JSON.stringify(dcdt),
+        "a value in m/s/K, e.g. -2.5 m/s/K",
+      );
+    }
+    unc.wedgeTemperature = { uncertainty: uT, dSoundSpeedDT: Number(m[1]) };
+  }
+  const windows = Object.keys(unc).length === 0
+    ? undefined
+    : paths.map((p) => searchWindow({ ...geo.inputs, traverses: p.traverses }, unc));
+
+  if (values.json) {
+    console.log(JSON.stringify(
+      {
+        units: "SI (m, s, m/s, rad)",
+        inputs: geo.inputs,
+        notes: geo.notes,
+        criticalAngles: crit,
+        primaryModeRule: PRIMARY_MODE_RULE,
+        paths,
+        searchWindows: windows,
+      },
+      null,
+      2,
+    ));
+    return 0;
+  }
+  const p0 = paths[0];
+  const out: string[] = [];
+  for (const n of geo.notes) out.push(`# ${n}`);
+  out.push(
+    `Snell chain: wedge ${dg(geo.inputs.wedgeAngle)} deg → wall ${p0.wallMode} ${
+      dg(p0.wallAngle)
+    } deg${p0.liningAngles.map((a, i) => ` → lining ${i + 1} ${dg(a)} deg`).join("")} → liquid ${
+      dg(p0.fluidAngle)
+    } deg`,
+  );
+  out.push(
+    `critical wedge angles: wall longitudinal ${dg(crit.wallLongitudinal)} deg, wall shear ${
+      dg(crit.wallShear)
+    } deg, liquid ${dg(crit.fluid)} deg`,
+  );
+  out.push(`wall mode rule: ${PRIMARY_MODE_RULE}`);
+  for (const m of p0.modes) {
+    out.push(
+      m.reachesLiquid
+        ? `  ${m.wallMode.padEnd(12)} ${m.role.padEnd(9)} wall angle ${dg(m.wallAngle)} deg, ` +
+          `arrival ${us(m.totalTime)} us`
+        : `  ${m.wallMode.padEnd(12)} blocked   ${m.blockedBy}`,
+    );
+  }
+  out.push(`inside diameter ${mm(p0.insideDiameter)} mm, bore ${mm(p0.boreDiameter)} mm`);
+  out.push("");
+  const extra = p0.referenceMarkDistance !== undefined;
+  out.push(
+    "mounting  traverses  spacing mm  liquid path mm  zero-flow time us" +
+      (p0.elementSpacing !== undefined ? "  element spacing mm" : "") +
+      (extra ? "  mark distance mm" : ""),
+  );
+  for (const p of paths) {
+    const other = p.modes.find((m) => m.role === "secondary");
+    out.push(
+      `${mountingName(p.traverses).padEnd(10)}${String(p.traverses).padEnd(11)}${
+        mm(p.spacing).padStart(10)
+      }${mm(p.fluidPathLength).padStart(16)}${us(p.totalTime).padStart(19)}` +
+        (p.elementSpacing !== undefined ? mm(p.elementSpacing).padStart(20) : "") +
+        (extra ? mm(p.referenceMarkDistance).padStart(18) : "") +
+        (other ? `   (${other.wallMode}: ${mm(other.spacing)} mm)` : ""),
+    );
+  }
+  if (windows) {
+    for (const [i, w] of windows.entries()) {
+      out.push("");
+      out.push(
+        `search window, ${mountingName(paths[i].traverses)}` +
+          ` spacing ${mm(w.spacing)} mm: search ${mm(w.range.min)}–${mm(w.range.max)} mm ` +
+          `(worst case), ±${mm(w.rss)} mm root-sum-square`,
+      );
+      for (const c of w.contributions) {
+        out.push(
+          `  ${c.input.padEnd(18)} moves the spacing by ${mm(Math.abs(c.contribution))} mm: ` +
+            (c.ifHigher === "no change"
+              ? "no effect on this path"
+              : `if the true value is higher, move ${c.ifHigher}`) +
+            (c.note ? ` (${c.note})` : ""),
+        );
+      }
+    }
+  }
+  console.log(out.join("\n"));
+  return 0;
+}
+
+if (import.meta.main) runMain(main);

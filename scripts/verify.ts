@@ -1,0 +1,129 @@
+/**
+ * Run every published verification table the registry knows (kind `verification`) against the
+ * code that evaluates it, and print source, quantity, expected, computed, relative difference and
+ * pass/fail. Exit 1 if any check fails.
+ *
+ * @module
+ */
+import { defaultRegistry } from "../lib/registry/mod.ts";
+import { verifyWaterTable, WATER_VERIFICATION_TABLES } from "../lib/water/mod.ts";
+import { SEAWATER_VERIFICATION_FORMULATIONS, verifySeawaterTable } from "../lib/liquids/mod.ts";
+import { parseCli, runMain } from "./_cli.ts";
+
+const HELP = `
+verify — run the published verification tables of the registry against this toolkit's code
+
+Usage:
+  deno task verify [--table ID] [--all-rows] [--strict] [--json]
+
+Options:
+  --table ID     run one table only (repeatable)
+  --all-rows     print every checked value, not only the worst of each table and the failures
+  --strict       also fail when a table has no evaluating code
+  --json         machine-readable output (every check)
+  --debug        stack trace on errors
+  -h, --help     this help
+
+Exit codes: 0 every check within its table's tolerance, 1 a check failed (or, with --strict, a
+table could not be run), 2 bad input.
+`;
+
+interface Check {
+  table: string;
+  row: number;
+  inputs: Readonly<Record<string, number>>;
+  column: string;
+  expected: number;
+  computed: number;
+  relDiff: number;
+  tolerance: number;
+  ok: boolean;
+}
+
+interface TableResult {
+  id: string;
+  formulation: string;
+  source: string;
+  status: "pass" | "fail" | "not run";
+  reason?: string;
+  checks: Check[];
+}
+
+function g(x: number): string {
+  return Number.isFinite(x) ? x.toPrecision(10) : String(x);
+}
+
+runMain(() => {
+  const { values } = parseCli(Deno.args, {
+    table: { type: "string", multiple: true },
+    "all-rows": { type: "boolean" },
+    strict: { type: "boolean" },
+  }, HELP);
+  const reg = defaultRegistry();
+  const wanted = values.table as string[] | undefined;
+  let tables = reg.verificationTables();
+  if (wanted?.length) tables = wanted.map((id) => reg.verification(id));
+  const water = new Set<string>(WATER_VERIFICATION_TABLES);
+  const sea = new Set(SEAWATER_VERIFICATION_FORMULATIONS);
+  const results: TableResult[] = [];
+  for (const t of tables) {
+    const base = { id: t.id as string, formulation: t.formulation as string, source: t.source };
+    let checks: Check[] | undefined;
+    let reason: string | undefined;
+    try {
+      if (water.has(t.id)) checks = verifyWaterTable(t.id);
+      else if (sea.has(t.formulation)) checks = verifySeawaterTable(t.id);
+      else reason = `no evaluating code for formulation "${t.formulation}"`;
+    } catch (e) {
+      reason = `error while evaluating: ${(e as Error).message}`;
+    }
+    if (!checks) {
+      results.push({
+        ...base,
+        status: reason?.startsWith("error") ? "fail" : "not run",
+        reason,
+        checks: [],
+      });
+    } else {
+      results.push({ ...base, status: checks.every((c) => c.ok) ? "pass" : "fail", checks });
+    }
+  }
+  const failed = results.filter((r) => r.status === "fail").length;
+  const notRun = results.filter((r) => r.status === "not run").length;
+  const nChecks = results.reduce((a, r) => a + r.checks.length, 0);
+  const nFailedChecks = results.reduce((a, r) => a + r.checks.filter((c) => !c.ok).length, 0);
+  if (values.json) {
+    console.log(JSON.stringify({ registryHash: reg.hash, tables: results }, null, 2));
+  } else {
+    console.log(`registry ${reg.hash.slice(0, 16)}…: ${results.length} verification tables`);
+    for (const r of results) {
+      console.log(`\n${r.status.toUpperCase().padEnd(7)} ${r.id} — ${r.formulation} [source ${r.source}]`);
+      if (r.reason) {
+        console.log(`        ${r.reason}`);
+        continue;
+      }
+      const worst = r.checks.reduce((a, c) => (c.relDiff > a.relDiff ? c : a), r.checks[0]);
+      const show = values["all-rows"]
+        ? r.checks
+        : [...new Set([worst, ...r.checks.filter((c) => !c.ok)])];
+      console.log(
+        `        ${r.checks.length} values; worst relative difference ${
+          worst.relDiff.toExponential(2)
+        } (tolerance ${worst.tolerance})`,
+      );
+      for (const c of show) {
+        const inp = Object.entries(c.inputs).map(([k, v]) => `${k}=${v}`).join(" ");
+        console.log(
+          `        ${c.ok ? "pass" : "FAIL"} row ${c.row} ${inp}: ${c.column} expected ${
+            g(c.expected)
+          } computed ${g(c.computed)} rel ${c.relDiff.toExponential(2)}`,
+        );
+      }
+    }
+    console.log(
+      `\n${nChecks - nFailedChecks} passed, ${nFailedChecks} failed` +
+        (notRun ? ` (${notRun} tables not run)` : ""),
+    );
+  }
+  return failed > 0 || (values.strict && notRun > 0) ? 1 : 0;
+});
