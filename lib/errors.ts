@@ -24,6 +24,8 @@ export class SnellpathError extends Error {
   /** Process exit code a script should use for this error. */
   readonly exitCode: ExitCode;
   /**
+   * Create the error.
+   *
    * @param message one-line message: which input, what was given, what is accepted
    * @param exitCode 2 for bad input, 1 for no physical answer
    */
@@ -52,6 +54,8 @@ export class InputError extends SnellpathError {
   /** What is accepted, as text. */
   readonly accepted: string;
   /**
+   * Create the error.
+   *
    * @param field the input's name
    * @param given what was given
    * @param accepted what is accepted
@@ -77,6 +81,8 @@ export class InputError extends SnellpathError {
  */
 export class UnitError extends InputError {
   /**
+   * Create the error.
+   *
    * @param field the input's name
    * @param given the text given
    * @param accepted the accepted dimension and units
@@ -101,6 +107,8 @@ export class NotFoundError extends InputError {
   /** Nearby candidates that do exist. */
   readonly nearby: readonly string[];
   /**
+   * Create the error.
+   *
    * @param field the input's name
    * @param given what was asked for
    * @param nearby what exists nearby
@@ -138,6 +146,8 @@ export class OutOfRangeError extends SnellpathError {
   /** The formulation whose range was exceeded. */
   readonly formulation: string;
   /**
+   * Create the error.
+   *
    * @param quantity the quantity checked
    * @param value the value, SI
    * @param range the validity range, SI
@@ -176,7 +186,11 @@ export class OutOfRangeError extends SnellpathError {
  * ```
  */
 export class NoPhysicalAnswerError extends SnellpathError {
-  /** @param message what has no answer and why */
+  /**
+   * Create the error.
+   *
+   * @param message what has no answer and why
+   */
   constructor(message: string) {
     super(message, 1);
     this.name = "NoPhysicalAnswerError";
@@ -201,6 +215,8 @@ export class RegistryError extends SnellpathError {
   /** The field path within the entry. */
   readonly fieldPath: string;
   /**
+   * Create the error.
+   *
    * @param file data file path
    * @param entry entry id or index
    * @param fieldPath field path

@@ -3,7 +3,15 @@
  *
  * @module
  */
-import type { Basis } from "./registry/schemas/common.ts";
+
+/** How a traced value got here: a registry basis, a user input, or a field measurement. */
+export type TraceBasis =
+  | "transcribed"
+  | "computed"
+  | "common-practice"
+  | "recalled"
+  | "input"
+  | "measured";
 
 /** One line of a result's trace. */
 export interface TraceEntry {
@@ -16,7 +24,7 @@ export interface TraceEntry {
   /** Source id in data/sources.yaml. */
   readonly source: string;
   /** How the value got here. */
-  readonly basis: Basis | "input" | "measured";
+  readonly basis: TraceBasis;
 }
 
 /**

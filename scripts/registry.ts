@@ -14,6 +14,7 @@
 import { z } from "zod";
 import { InputError, NotFoundError } from "../lib/errors.ts";
 import {
+  buildSnapshot,
   createRegistry,
   DATA_DIR,
   type DataDoc,
@@ -21,6 +22,7 @@ import {
   loadRegistry,
   nearest,
   type Registry,
+  SNAPSHOT_FILE,
 } from "../lib/registry/mod.ts";
 import { SCHEMAS } from "../lib/registry/schemas/mod.ts";
 import type { MaterialProperties } from "../lib/registry/q_materials.ts";
@@ -38,6 +40,9 @@ usage:
   registry export [--out FILE]         the whole registry as JSON: hash, sources, every file
   registry export --schema [--out FILE]
                                        a JSON Schema of the data files, one definition per kind
+  registry snapshot [dir]              validate a data folder in full and write its validated
+                                       snapshot (dir/snapshot.json), which the loader uses while
+                                       the YAML files are byte-for-byte unchanged
 
 options:
   --out FILE   write to FILE instead of standard output (export only)
@@ -310,11 +315,25 @@ async function main(): Promise<number> {
     case "validate": {
       tooMany(1);
       const dir = rest[0] ?? DATA_DIR;
-      const reg = createRegistry(loadRegistry(dir));
+      const reg = createRegistry(loadRegistry(dir, { snapshot: false }));
       const files = reg.loaded.docs.length;
       if (json) {
         console.log(JSON.stringify({ ok: true, dir: reg.loaded.dir, files, hash: reg.hash }));
       } else console.log(`OK ${reg.hash} (${files} files, ${reg.loaded.sources.size} sources)`);
+      return 0;
+    }
+    case "snapshot": {
+      tooMany(1);
+      const dir = rest[0] ?? DATA_DIR;
+      const text = buildSnapshot(dir);
+      const target = new URL(SNAPSHOT_FILE, loadRegistry(dir, { snapshot: false }).dir);
+      Deno.writeTextFileSync(target, text);
+      const hash = JSON.parse(text).hash;
+      console.log(
+        json
+          ? JSON.stringify({ ok: true, file: target.pathname, hash })
+          : `wrote ${target.pathname} (${hash})`,
+      );
       return 0;
     }
     case "export":
@@ -332,7 +351,7 @@ async function main(): Promise<number> {
       throw new InputError(
         "command",
         command === undefined ? "nothing" : JSON.stringify(command),
-        "one of: list, show, validate, export (see --help)",
+        "one of: list, show, validate, snapshot, export (see --help)",
       );
   }
 }

@@ -6,7 +6,7 @@
  */
 import { InputError } from "../lib/errors.ts";
 import { parseQuantity } from "../lib/units.ts";
-import { type LiquidState, liquidProperties, liquids } from "../lib/liquids/mod.ts";
+import { liquidProperties, liquids, type LiquidState } from "../lib/liquids/mod.ts";
 import { parseCli, requireOption, runMain } from "./_cli.ts";
 
 const HELP = `
@@ -49,7 +49,9 @@ function fmtState(s: LiquidState, T: number, p: number): string {
     `  density            ${s.density.toFixed(2)} kg/m³`,
     `  dynamic viscosity  ${(s.dynamicViscosity * 1e3).toPrecision(5)} mPa·s`,
     `  kinematic visc.    ${(s.kinematicViscosity * 1e6).toPrecision(5)} mm²/s`,
-    `  sources:           ${[...new Set(s.trace.map((t) => `${t.source} (${t.basis})`))].join(", ")}`,
+    `  sources:           ${
+      [...new Set(s.trace.map((t) => `${t.source} (${t.basis})`))].join(", ")
+    }`,
   ];
   for (const w of s.warnings) lines.push(`  warning: ${w.message}`);
   return lines.join("\n");
@@ -93,7 +95,11 @@ runMain(() => {
   if (typeof values.salinity === "string") {
     salinity = Number(values.salinity);
     if (values.salinity.trim() === "" || !Number.isFinite(salinity)) {
-      throw new InputError("--salinity", JSON.stringify(values.salinity), "a practical salinity such as 35");
+      throw new InputError(
+        "--salinity",
+        JSON.stringify(values.salinity),
+        "a practical salinity such as 35",
+      );
     }
   }
   if (id === "seawater" && salinity === undefined) {
@@ -142,7 +148,9 @@ runMain(() => {
       for (const r of rows) {
         console.log(
           `  ${r.formulation.padEnd(18)} ${
-            r.soundSpeed !== undefined ? `${r.soundSpeed.toFixed(3)} m/s` : `not applicable: ${r.error}`
+            r.soundSpeed !== undefined
+              ? `${r.soundSpeed.toFixed(3)} m/s`
+              : `not applicable: ${r.error}`
           }`,
         );
       }

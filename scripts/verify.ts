@@ -97,7 +97,9 @@ runMain(() => {
   } else {
     console.log(`registry ${reg.hash.slice(0, 16)}…: ${results.length} verification tables`);
     for (const r of results) {
-      console.log(`\n${r.status.toUpperCase().padEnd(7)} ${r.id} — ${r.formulation} [source ${r.source}]`);
+      console.log(
+        `\n${r.status.toUpperCase().padEnd(7)} ${r.id} — ${r.formulation} [source ${r.source}]`,
+      );
       if (r.reason) {
         console.log(`        ${r.reason}`);
         continue;

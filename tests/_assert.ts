@@ -5,7 +5,20 @@
  */
 import assert from "node:assert/strict";
 export { assert };
-export const { equal, deepEqual, ok, throws, rejects, notEqual, match } = assert;
+/** Strict equality. */
+export const equal: typeof assert.equal = assert.equal;
+/** Deep strict equality. */
+export const deepEqual: typeof assert.deepEqual = assert.deepEqual;
+/** Truthiness (a type assertion). */
+export const ok: typeof assert.ok = assert.ok;
+/** The function throws (optionally an error matching the validator). */
+export const throws: typeof assert.throws = assert.throws;
+/** The promise rejects. */
+export const rejects: typeof assert.rejects = assert.rejects;
+/** Strict inequality. */
+export const notEqual: typeof assert.notEqual = assert.notEqual;
+/** The string matches the pattern. */
+export const match: typeof assert.match = assert.match;
 
 /**
  * Assert |actual − expected| ≤ tol·|expected| (relative) and return the relative difference.

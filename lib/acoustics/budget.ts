@@ -136,7 +136,7 @@ export function intensityTransmission(z1: number, z2: number): number {
 }
 
 /** Attenuation of a material at a reference frequency (as material entries give it). */
-export interface Attenuation {
+export interface StatedAttenuation {
   /** Attenuation coefficient, Np/m, at `frequency`. */
   readonly value: number;
   /** Frequency it was stated at, Hz. */
@@ -148,7 +148,7 @@ export interface BudgetMedium {
   /** Density, kg/m³. */
   readonly density: number;
   /** Attenuation at a reference frequency; scaled linearly with frequency. */
-  readonly attenuation?: Attenuation;
+  readonly attenuation?: StatedAttenuation;
 }
 
 /** One term of the budget. */

@@ -146,12 +146,13 @@ export interface ClampOnPath {
  * it reaches the liquid; otherwise the longitudinal mode even near grazing. Beyond the first
  * critical angle (steel behind an acrylic-class wedge at about 38°) only shear remains.
  */
-export const PRIMARY_MODE_RULE =
+export const PRIMARY_MODE_RULE: string =
   "longitudinal when it reaches the liquid at a wall angle of at most 70 deg, otherwise shear " +
   "(common practice)";
 
 /** Wall angle (rad) above which a longitudinal wall wave is taken as too near grazing. */
 export const GRAZING_LIMIT: number = 70 * Math.PI / 180;
+const SIN_GRAZING = Math.sin(GRAZING_LIMIT);
 
 const EMPTY: readonly LiningLayer[] = Object.freeze([]);
 const DEG = 180 / Math.PI;
@@ -419,32 +420,68 @@ export function clampOnPath(inputs: ClampOnInputs): ClampOnPath {
   }
   const fixed = liningTime + (wedgeTime ?? 0) + fluidTime;
 
-  // Wall modes
-  const lmode = wallModePath("longitudinal", cL, s, wall, liquidShift + liningShift, fixed, aw, cw);
-  const smode = cS === undefined
-    ? undefined
-    : wallModePath("shear", cS, s, wall, liquidShift + liningShift, fixed, aw, cw);
-
+  // Wall modes: pick the primary one from the refraction sines, then build each record once.
+  const sL = s * cL;
+  const sS = cS === undefined ? 2 : s * cS;
+  const lOk = sL < 1;
+  const sOk = sS < 1;
   const forced = inputs.wallMode ?? "auto";
   let primary: WallMode;
   if (forced === "longitudinal" || forced === "shear") {
     primary = forced;
-    const m = forced === "longitudinal" ? lmode : smode!;
-    if (!m.reachesLiquid) {
+    if (!(forced === "longitudinal" ? lOk : sOk)) {
+      const m = wallModePath(
+        forced,
+        forced === "longitudinal" ? cL : cS!,
+        s,
+        wall,
+        0,
+        0,
+        aw,
+        cw,
+        "blocked",
+      );
       throw new NoPhysicalAnswerError(`no ${forced} wave in the wall: ${m.blockedBy}`);
     }
-  } else if (lmode.reachesLiquid && lmode.wallAngle! <= GRAZING_LIMIT) {
+  } else if (lOk && sL <= SIN_GRAZING) {
     primary = "longitudinal";
-  } else if (smode?.reachesLiquid) {
+  } else if (sOk) {
     primary = "shear";
-  } else if (lmode.reachesLiquid) {
+  } else if (lOk) {
     primary = "longitudinal";
   } else {
-    const why = [lmode.blockedBy, smode?.blockedBy ?? "shear speed of the wall not given"];
+    const why = [
+      wallModePath("longitudinal", cL, s, wall, 0, 0, aw, cw, "blocked").blockedBy,
+      cS === undefined
+        ? "shear speed of the wall not given"
+        : wallModePath("shear", cS, s, wall, 0, 0, aw, cw, "blocked").blockedBy,
+    ];
     throw new NoPhysicalAnswerError(`no wave reaches the liquid: ${why.join("; ")}`);
   }
-  const modes: ModePath[] = [role(lmode, primary)];
-  if (smode) modes.push(role(smode, primary));
+  const inner = liquidShift + liningShift;
+  const lmode = wallModePath(
+    "longitudinal",
+    cL,
+    s,
+    wall,
+    inner,
+    fixed,
+    aw,
+    cw,
+    primary === "longitudinal" ? "primary" : "secondary",
+  );
+  const smode = cS === undefined ? undefined : wallModePath(
+    "shear",
+    cS,
+    s,
+    wall,
+    inner,
+    fixed,
+    aw,
+    cw,
+    primary === "shear" ? "primary" : "secondary",
+  );
+  const modes: ModePath[] = smode ? [lmode, smode] : [lmode];
   const pm = primary === "longitudinal" ? lmode : smode!;
 
   const spacing = pm.spacing!;
@@ -490,17 +527,21 @@ function wallModePath(
   innerTime: number,
   aw: number,
   cw: number,
+  role: "primary" | "secondary" | "blocked",
 ): ModePath {
   const sw = s * c;
   if (!(sw < 1)) {
-    const which = mode === "longitudinal" ? "first" : "second";
     return {
       wallMode: mode,
       wallSoundSpeed: c,
       reachesLiquid: false,
       role: "blocked",
-      blockedBy: `wall ${mode} wave beyond the ${which} critical angle ` +
-        `${deg(Math.asin(cw / c))} deg (wedge angle ${deg(aw)} deg, wall ${c} m/s)`,
+      // Built on demand: message formatting is the costliest part of a blocked mode.
+      get blockedBy(): string {
+        const which = mode === "longitudinal" ? "first" : "second";
+        return `wall ${mode} wave beyond the ${which} critical angle ` +
+          `${deg(Math.asin(cw / c))} deg (wedge angle ${deg(aw)} deg, wall ${c} m/s)`;
+      },
     };
   }
   const cosw = Math.sqrt(1 - sw * sw);
@@ -509,17 +550,12 @@ function wallModePath(
     wallMode: mode,
     wallSoundSpeed: c,
     reachesLiquid: true,
-    role: "secondary",
+    role,
     wallAngle: Math.asin(sw),
     spacing: innerShift + 2 * wall * sw / cosw,
     wallTime,
     totalTime: innerTime + wallTime,
   };
-}
-
-function role(m: ModePath, primary: WallMode): ModePath {
-  if (!m.reachesLiquid) return m;
-  return m.wallMode === primary ? { ...m, role: "primary" } : m;
 }
 
 function deg(rad: number): string {

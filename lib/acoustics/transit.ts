@@ -106,7 +106,7 @@ export function transitTimes(path: TransitPath, velocity: number): TransitTimes 
 }
 
 /** Relative sensitivity coefficients ∂v/∂x · x/v of a velocity form. */
-export type Sensitivities = Readonly<Record<string, number>>;
+export type VelocitySensitivities = Readonly<Record<string, number>>;
 
 /** The path velocity from measured times, in three forms. */
 export interface PathVelocity {
@@ -115,9 +115,15 @@ export interface PathVelocity {
   /** Liquid-path times τ_up, τ_dn (measured less the fixed time), s. */
   readonly liquidTimes: { readonly upstream: number; readonly downstream: number };
   /** Snell-invariant form v = c_w/(2 sin θ_w) · Δt/τ (τ = mean liquid time): no liquid speed. */
-  readonly snellInvariant: { readonly velocity: number; readonly sensitivity: Sensitivities };
+  readonly snellInvariant: {
+    readonly velocity: number;
+    readonly sensitivity: VelocitySensitivities;
+  };
   /** Sound-speed form v = c_f²·Δt / (2·N·D·tan θ_f), with θ_f from Snell's law. */
-  readonly soundSpeedForm: { readonly velocity: number; readonly sensitivity: Sensitivities };
+  readonly soundSpeedForm: {
+    readonly velocity: number;
+    readonly sensitivity: VelocitySensitivities;
+  };
   /** Liquid sound speed implied by the times, c = L·(1/τ_up + 1/τ_dn)/2 (exact), m/s. */
   readonly impliedSoundSpeed: number;
 }

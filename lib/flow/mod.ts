@@ -12,14 +12,14 @@
  * @module
  */
 export { type FlowRegime, reynoldsNumber } from "./reynolds.ts";
-export { type FrictionMethod, frictionFactor, frictionFactorExplicit } from "./friction.ts";
+export { frictionFactor, frictionFactorExplicit, type FrictionMethod } from "./friction.ts";
 export {
   type ChordRule,
   type ChordWeights,
   chordWeights,
   gaussLegendre,
-  halfChordRule,
   type HalfChordRule,
+  halfChordRule,
 } from "./quadrature.ts";
 export {
   chordMeanVelocity,
@@ -27,15 +27,15 @@ export {
   powerLawExponent,
   powerLawExponentFromFriction,
   profileFactor,
-  profileFactorEstimate,
   type ProfileFactorEstimate,
-  profileFactorRange,
+  profileFactorEstimate,
   type ProfileFactorRange,
+  profileFactorRange,
   type ProfileModel,
   type ProfileOptions,
-  profileShape,
   type ProfileShape,
+  profileShape,
   profileVelocity,
   TURBULENT_MODELS,
 } from "./profile.ts";
-export { flowConstants, type FlowConstants } from "./constants.ts";
+export { type FlowConstants, flowConstants } from "./constants.ts";

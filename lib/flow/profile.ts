@@ -243,7 +243,11 @@ function cn(n: number): number {
  * if (profileVelocity(lam, 1, 1) !== 2) throw new Error("laminar centre is twice the mean");
  * ```
  */
-export function profileVelocity(shape: ProfileShape, oneMinusR: number, oneMinusR2: number): number {
+export function profileVelocity(
+  shape: ProfileShape,
+  oneMinusR: number,
+  oneMinusR2: number,
+): number {
   const wl = shape.laminarWeight;
   let u = wl > 0 ? wl * 2 * oneMinusR2 : 0;
   if (wl < 1) {
@@ -291,9 +295,10 @@ export function chordMeanVelocity(shape: ProfileShape, chord: number): number {
         const omr2 = g * oneMinusS2[i];
         const r = Math.sqrt(h2 + g * s[i] * s[i]);
         const omr = omr2 / (1 + r);
-        mt += w[i] * (shape.turbulentKind === "power"
-          ? shape.cn * Math.pow(omr, 1 / shape.n)
-          : 1 + shape.beta * (Math.log(omr) + 1.5) / shape.kappa);
+        mt += w[i] *
+          (shape.turbulentKind === "power"
+            ? shape.cn * Math.pow(omr, 1 / shape.n)
+            : 1 + shape.beta * (Math.log(omr) + 1.5) / shape.kappa);
       }
     }
     m += (1 - wl) * mt;
@@ -476,7 +481,11 @@ export function profileFactorRange(
   requireFinite("reynoldsMin", reynoldsMin, "1", true);
   requireFinite("reynoldsMax", reynoldsMax, "1", true);
   if (reynoldsMax < reynoldsMin) {
-    throw new InputError("reynoldsMax", String(reynoldsMax), `a value ≥ reynoldsMin ${reynoldsMin}`);
+    throw new InputError(
+      "reynoldsMax",
+      String(reynoldsMax),
+      `a value ≥ reynoldsMin ${reynoldsMin}`,
+    );
   }
   const c = flowConstants();
   const res: number[] = [];

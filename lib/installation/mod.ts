@@ -24,8 +24,8 @@ export {
   type ErrorComponents,
   MODEL_NOTE,
   MODEL_RELATIVE_SPREAD,
-  type ProfileErrorInput,
   profileErrorEstimate,
+  type ProfileErrorInput,
   type ProfileErrorResult,
   profileErrorSweep,
   type SweepRow,
@@ -33,8 +33,8 @@ export {
 export {
   DEFAULT_PATH_ORIENTATIONS,
   type RankedPosition,
-  rankPositions,
   type RankInput,
+  rankPositions,
   type RankResult,
   SHORT_RUN_FRACTION,
 } from "./rank.ts";

@@ -32,8 +32,8 @@ import { halfChordRule } from "../flow/quadrature.ts";
 import {
   chordMeanVelocity,
   type ProfileModel,
-  profileShape,
   type ProfileShape,
+  profileShape,
 } from "../flow/profile.ts";
 import { type Fitting, resolveFitting } from "./fittings.ts";
 

@@ -88,8 +88,9 @@ export interface RankResult {
  *   from the upstream fitting (common practice).
  * - Ranking: each candidate position × path orientation is scored with
  *   {@link profileErrorEstimate} at every Reynolds number given (the worst magnitude counts)
- *   plus the downstream fitting's reading shift; smaller is better. The recommended
- *   candidate is the best one meeting the straight-run rule when any does, else the best.
+ *   plus the downstream fitting's reading shift; smaller is better. The ranking lists the
+ *   candidates meeting the straight-run rule first, then marginal, then short ones, each group
+ *   by score; the recommended candidate is the first.
  *
  * Sources: requirements `common-practice`; model as {@link profileErrorEstimate}.
  * The ranking is an estimate, not a calibration.
@@ -174,8 +175,8 @@ export function rankPositions(input: RankInput): RankResult {
     }
   }
   const vOrder = { meets: 0, marginal: 1, short: 2 };
-  ranking.sort((a, b) => a.score - b.score || vOrder[a.verdict] - vOrder[b.verdict]);
-  const best = ranking.find((r) => r.verdict === "meets") ?? ranking[0];
+  ranking.sort((a, b) => vOrder[a.verdict] - vOrder[b.verdict] || a.score - b.score);
+  const best = ranking[0];
   const notes = [
     MODEL_NOTE,
     `common-practice position: ${
@@ -186,7 +187,9 @@ export function rankPositions(input: RankInput): RankResult {
     "path planes are measured from the vertical; on horizontal pipes keep the path within 45° " +
     "of horizontal so the beam avoids gas at the crown and sediment at the invert (common practice)",
   ];
-  if (!meets) notes.push("the run is short of the common-practice requirement: expect a larger error");
+  if (!meets) {
+    notes.push("the run is short of the common-practice requirement: expect a larger error");
+  }
   if (res.length > 1) notes.push("each candidate is scored by its worst error over the flow range");
   return Object.freeze({
     commonPracticePosition,

@@ -106,7 +106,9 @@ export function checkStraightRun(input: StraightRunInput): StraightRunResult {
     trace(`required upstream run after ${up.id}`, reqUp, "D", src(up), basis(up)),
   ];
   if (down) {
-    t.push(trace(`required downstream run before ${down.id}`, reqDown, "D", src(down), basis(down)));
+    t.push(
+      trace(`required downstream run before ${down.id}`, reqDown, "D", src(down), basis(down)),
+    );
   }
   return Object.freeze({
     verdict,

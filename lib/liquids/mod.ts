@@ -32,8 +32,8 @@ export {
 export {
   conservativeTemperature,
   densityGibbs as seawaterDensityGibbs,
-  gibbsSeawater,
   type GibbsDerivatives,
+  gibbsSeawater,
   potentialTemperature,
   soundSpeedGibbs as seawaterSoundSpeedGibbs,
 } from "./gibbs.ts";
@@ -46,7 +46,7 @@ export {
   waltherViscosity,
 } from "./petroleum.ts";
 export {
-  type SeawaterCheck,
   SEAWATER_VERIFICATION_FORMULATIONS,
+  type SeawaterCheck,
   verifySeawaterTable,
 } from "./verify.ts";

@@ -241,7 +241,9 @@ function registryLiquid(
 
   if (![c, rho, mu, spread].every((x) => Number.isFinite(x)) || !(c > 0 && rho > 0 && mu > 0)) {
     throw new NoPhysicalAnswerError(
-      `${entry.id}: no physical property values at ${tC.toFixed(2)} °C, ${p} Pa (far outside the data)`,
+      `${entry.id}: no physical property values at ${
+        tC.toFixed(2)
+      } °C, ${p} Pa (far outside the data)`,
     );
   }
   return {
@@ -320,7 +322,11 @@ export function liquidProperties(
   if (id === "water") {
     const f = (options.formulation ?? "iapws95") as WaterFormulation;
     if (!WATER_FORMS.includes(f)) {
-      throw new InputError("formulation", JSON.stringify(f), `for water one of ${WATER_FORMS.join(", ")}`);
+      throw new InputError(
+        "formulation",
+        JSON.stringify(f),
+        `for water one of ${WATER_FORMS.join(", ")}`,
+      );
     }
     const c = waterSoundSpeed(T, p, f, opts);
     const rho = waterDensity(T, p, f === "if97" ? "if97" : "iapws95", opts);
@@ -347,7 +353,11 @@ export function liquidProperties(
     }
     const f = (options.formulation ?? "teos10") as SeawaterFormulation;
     if (!SEA_FORMS.includes(f)) {
-      throw new InputError("formulation", JSON.stringify(f), `for seawater one of ${SEA_FORMS.join(", ")}`);
+      throw new InputError(
+        "formulation",
+        JSON.stringify(f),
+        `for seawater one of ${SEA_FORMS.join(", ")}`,
+      );
     }
     const c = seawater.soundSpeed(S, T, p, f, opts);
     const rho = seawater.density(S, T, p, f === "teos10-gibbs" ? "teos10-gibbs" : "teos10", opts);
@@ -369,7 +379,13 @@ export function liquidProperties(
       trace: [
         ...seawaterTrace(f),
         trace("salinity (practical)", S, "", "millero-2008", "input"),
-        trace("viscosity ratio: Sharqawy et al. 2010", "eq. 22", "", "sharqawy-2010", "transcribed"),
+        trace(
+          "viscosity ratio: Sharqawy et al. 2010",
+          "eq. 22",
+          "",
+          "sharqawy-2010",
+          "transcribed",
+        ),
         ...waterTrace("viscosity"),
       ],
       warnings,

@@ -6,8 +6,34 @@
  */
 import { NotFoundError } from "../errors.ts";
 import type { DataDoc, LoadedRegistry } from "./load.ts";
-import type { Source } from "./schemas/sources.ts";
+import type { SourceEntry as Source } from "./schemas/sources.ts";
 import { nearest } from "./nearest.ts";
+
+/** Core queries: hash, sources, documents by kind, coefficient sets, tables. */
+export interface CoreQueries {
+  /** SHA-256 of the canonical serialisation of the data. */
+  readonly hash: string;
+  /** The loaded data, for advanced use. */
+  readonly loaded: LoadedRegistry;
+  /** A bibliography entry by id. */
+  source(id: string): Source;
+  /** Every bibliography entry. */
+  sources(): Source[];
+  /** Every data file of a kind. */
+  documents(kind: string): readonly DataDoc[];
+  /** A coefficient set by id (data files of kind `coefficients`). */
+  // deno-lint-ignore no-explicit-any
+  coefficients(id: string): any;
+  /** A published verification table by id (kind `verification`). */
+  // deno-lint-ignore no-explicit-any
+  verification(id: string): any;
+  /** Every published verification table. */
+  // deno-lint-ignore no-explicit-any
+  verificationTables(): any[];
+  /** A generic sourced table by id (kind `table`). */
+  // deno-lint-ignore no-explicit-any
+  table(id: string): any;
+}
 
 /**
  * Core queries bound to one loaded registry.
@@ -23,7 +49,7 @@ import { nearest } from "./nearest.ts";
  * if (q.sources().length === 0) throw new Error("sources");
  * ```
  */
-export function coreQueries(loaded: LoadedRegistry) {
+export function coreQueries(loaded: LoadedRegistry): CoreQueries {
   const byKind = new Map<string, DataDoc[]>();
   for (const d of loaded.docs) {
     const list = byKind.get(d.kind) ?? [];

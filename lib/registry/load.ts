@@ -12,7 +12,7 @@ import { createHash } from "node:crypto";
 import type { z } from "zod";
 import { RegistryError } from "../errors.ts";
 import { SCHEMAS } from "./schemas/mod.ts";
-import type { Source } from "./schemas/sources.ts";
+import type { SourceEntry as Source } from "./schemas/sources.ts";
 
 /** One validated data file. */
 export interface DataDoc {
@@ -35,6 +35,8 @@ export interface LoadedRegistry {
   readonly sources: ReadonlyMap<string, Source>;
   /** SHA-256 (hex) of the canonical serialisation of every data file. */
   readonly hash: string;
+  /** Whether the validated snapshot was used (the YAML bytes matched it). */
+  readonly fromSnapshot: boolean;
 }
 
 /** Largest data file the loader reads, in bytes. */
@@ -178,40 +180,43 @@ function checkDuplicateIds(docs: readonly DataDoc[]): void {
   }
 }
 
-/**
- * Load, validate, freeze and hash the reference data in a folder.
- *
- * Reads every `*.yaml` below `dir` except `demo/`. Each file names its `kind`, one of the
- * schemas in `schemas/mod.ts`. Refuses, with a {@link RegistryError} naming the file, the
- * entry and the field: YAML syntax errors, an unknown kind, a schema violation (bad unit,
- * impossible row), a number without source and basis, an unknown source id, a duplicate id.
- *
- * The hash is SHA-256 over the canonical JSON (sorted keys) of `[file, content]` pairs in
- * path order: it is the same on every machine for the same data.
- *
- * @param dir the data folder (path or file URL)
- * @returns the validated registry data
- *
- * @example
- * ```ts
- * import { loadRegistry } from "./load.ts";
- * const reg = loadRegistry(new URL("../../data/", import.meta.url));
- * if (!/^[0-9a-f]{64}$/.test(reg.hash)) throw new Error("hash");
- * ```
- */
-export function loadRegistry(dir: string | URL): LoadedRegistry {
-  const base = toDirUrl(dir);
-  const files = listYaml(base);
-  const docs: DataDoc[] = [];
+/** Name of the validated snapshot inside the data folder (built by `deno task registry snapshot`). */
+export const SNAPSHOT_FILE = "snapshot.json";
+const SNAPSHOT_VERSION = 1;
+
+/** Options of {@link loadRegistry}. */
+export interface LoadOptions {
+  /**
+   * Use the validated snapshot (`data/snapshot.json`) when it was built from exactly these
+   * YAML files (same bytes: SHA-256 over names and contents). Default true. A stale or absent
+   * snapshot falls back to full validation.
+   */
+  readonly snapshot?: boolean;
+}
+
+function readSources(dir: URL): { files: string[]; texts: string[]; rawHash: string } {
+  const files = listYaml(dir);
+  const texts: string[] = [];
+  const h = createHash("sha256");
   for (const file of files) {
-    const url = new URL(file, base);
+    const url = new URL(file, dir);
     const size = Deno.statSync(url).size;
     if (size > MAX_DATA_FILE_BYTES) {
       throw new RegistryError(file, "(file)", "(root)", `larger than ${MAX_DATA_FILE_BYTES} bytes`);
     }
+    const text = Deno.readTextFileSync(url);
+    texts.push(text);
+    h.update(file).update("\0").update(text).update("\0");
+  }
+  return { files, texts, rawHash: h.digest("hex") };
+}
+
+function validateAll(files: string[], texts: string[]): DataDoc[] {
+  const docs: DataDoc[] = [];
+  files.forEach((file, i) => {
     let raw: unknown;
     try {
-      raw = parseYaml(Deno.readTextFileSync(url), { maxAliasCount: 50, uniqueKeys: true });
+      raw = parseYaml(texts[i], { maxAliasCount: 50, uniqueKeys: true });
     } catch (e) {
       const msg = e instanceof Error ? e.message.split("\n")[0] : String(e);
       throw new RegistryError(file, "(file)", "(root)", `not valid YAML: ${msg}`);
@@ -237,7 +242,11 @@ export function loadRegistry(dir: string | URL): LoadedRegistry {
       );
     }
     docs.push({ file, kind: kind as string, data: r.data });
-  }
+  });
+  return docs;
+}
+
+function collectSources(docs: readonly DataDoc[]): Map<string, Source> {
   const sources = new Map<string, Source>();
   for (const d of docs.filter((d) => d.kind === "sources")) {
     for (const [i, s] of (d.data.sources as Source[]).entries()) {
@@ -250,16 +259,107 @@ export function loadRegistry(dir: string | URL): LoadedRegistry {
   if (sources.size === 0) {
     throw new RegistryError("sources.yaml", "(file)", "(root)", "no bibliography found");
   }
-  for (const d of docs) if (d.kind !== "sources") checkProvenance(d.file, d.data, sources);
-  checkDuplicateIds(docs);
-  const hash = createHash("sha256")
+  return sources;
+}
+
+function contentHash(docs: readonly DataDoc[]): string {
+  return createHash("sha256")
     .update(canonicalJson(docs.map((d) => [d.file, d.data])))
     .digest("hex");
+}
+
+function fullValidation(files: string[], texts: string[]): DataDoc[] {
+  const docs = validateAll(files, texts);
+  const sources = collectSources(docs);
+  for (const d of docs) if (d.kind !== "sources") checkProvenance(d.file, d.data, sources);
+  checkDuplicateIds(docs);
+  return docs;
+}
+
+/**
+ * Build the validated snapshot of a data folder: full validation, then the validated
+ * documents as JSON with the SHA-256 of the YAML bytes they came from and the content hash.
+ *
+ * @param dir the data folder
+ * @returns the snapshot's JSON text
+ *
+ * @example
+ * ```ts
+ * import { buildSnapshot } from "./load.ts";
+ * const snap = JSON.parse(buildSnapshot(new URL("../../data/", import.meta.url)));
+ * if (snap.hash.length !== 64) throw new Error();
+ * ```
+ */
+export function buildSnapshot(dir: string | URL): string {
+  const base = toDirUrl(dir);
+  const { files, texts, rawHash } = readSources(base);
+  const docs = fullValidation(files, texts);
+  return JSON.stringify({ version: SNAPSHOT_VERSION, rawHash, hash: contentHash(docs), docs }) +
+    "\n";
+}
+
+// deno-lint-ignore no-explicit-any
+function readSnapshot(dir: URL, rawHash: string): any | undefined {
+  let text: string;
+  try {
+    text = Deno.readTextFileSync(new URL(SNAPSHOT_FILE, dir));
+  } catch {
+    return undefined;
+  }
+  try {
+    const snap = JSON.parse(text);
+    if (
+      snap?.version === SNAPSHOT_VERSION && snap.rawHash === rawHash && Array.isArray(snap.docs)
+    ) {
+      return snap;
+    }
+  } catch {
+    // a broken snapshot is ignored: full validation follows
+  }
+  return undefined;
+}
+
+/**
+ * Load, validate, freeze and hash the reference data in a folder.
+ *
+ * Reads every `*.yaml` below `dir` except `demo/`. Each file names its `kind`, one of the
+ * schemas in `schemas/mod.ts`. Refuses, with a {@link RegistryError} naming the file, the
+ * entry and the field: YAML syntax errors, an unknown kind, a schema violation (bad unit,
+ * impossible row), a number without source and basis, an unknown source id, a duplicate id.
+ *
+ * Full validation (YAML parsing and zod) takes long on a slow machine, so a validated
+ * snapshot (`snapshot.json`, built by `deno task registry snapshot`) is used when its
+ * recorded SHA-256 of the YAML bytes matches the files on disk; any edit to a YAML file makes
+ * it stale and the loader validates in full. The content hash is recomputed from the
+ * documents either way.
+ *
+ * The hash is SHA-256 over the canonical JSON (sorted keys) of `[file, content]` pairs in
+ * path order: it is the same on every machine for the same data.
+ *
+ * @param dir the data folder (path or file URL)
+ * @param options snapshot use
+ * @returns the validated registry data
+ *
+ * @example
+ * ```ts
+ * import { loadRegistry } from "./load.ts";
+ * const reg = loadRegistry(new URL("../../data/", import.meta.url));
+ * if (!/^[0-9a-f]{64}$/.test(reg.hash)) throw new Error("hash");
+ * ```
+ */
+export function loadRegistry(dir: string | URL, options?: LoadOptions): LoadedRegistry {
+  const base = toDirUrl(dir);
+  const { files, texts, rawHash } = readSources(base);
+  const snap = options?.snapshot === false ? undefined : readSnapshot(base, rawHash);
+  const docs: DataDoc[] = snap ? snap.docs : fullValidation(files, texts);
+  const sources = collectSources(docs);
+  const hash = contentHash(docs);
   for (const d of docs) deepFreeze(d.data);
   return Object.freeze({
     dir: base.href,
     docs: Object.freeze(docs),
     sources,
     hash,
+    fromSnapshot: snap !== undefined,
   });
 }

@@ -11,15 +11,23 @@
  * @module
  */
 import { type LoadedRegistry, loadRegistry } from "./load.ts";
-import { coreQueries } from "./core.ts";
+import { type CoreQueries, coreQueries } from "./core.ts";
 import { pipeQueries } from "./q_pipes.ts";
 import { materialQueries } from "./q_materials.ts";
 import { liquidQueries } from "./q_liquids.ts";
 import { fittingQueries } from "./q_fittings.ts";
 
-export { canonicalJson, loadRegistry, MAX_DATA_FILE_BYTES } from "./load.ts";
-export type { DataDoc, LoadedRegistry } from "./load.ts";
+export {
+  buildSnapshot,
+  canonicalJson,
+  loadRegistry,
+  MAX_DATA_FILE_BYTES,
+  SNAPSHOT_FILE,
+} from "./load.ts";
+export type { DataDoc, LoadedRegistry, LoadOptions } from "./load.ts";
 export { nearest } from "./nearest.ts";
+export type { SourceEntry } from "./schemas/sources.ts";
+export type { CoreQueries } from "./core.ts";
 export type {
   MaterialAttenuation,
   MaterialBasis,
@@ -42,7 +50,7 @@ export type {
  * if (reg.sources().length < 1) throw new Error("sources");
  * ```
  */
-export function createRegistry(loaded: LoadedRegistry) {
+export function createRegistry(loaded: LoadedRegistry): Registry {
   return Object.freeze({
     ...coreQueries(loaded),
     ...pipeQueries(loaded),
@@ -52,8 +60,13 @@ export function createRegistry(loaded: LoadedRegistry) {
   });
 }
 
-/** The registry's query object. */
-export type Registry = ReturnType<typeof createRegistry>;
+/** The registry's query object: core, pipe, material, liquid and fitting queries. */
+export type Registry =
+  & CoreQueries
+  & ReturnType<typeof pipeQueries>
+  & ReturnType<typeof materialQueries>
+  & ReturnType<typeof liquidQueries>
+  & ReturnType<typeof fittingQueries>;
 
 /** The bundled data folder. */
 export const DATA_DIR: URL = new URL("../../data/", import.meta.url);

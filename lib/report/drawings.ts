@@ -281,7 +281,7 @@ export interface AxialPathOptions {
  * import { svgAxialPath } from "./drawings.ts";
  * const svg = svgAxialPath({ outsideDiameter: 0.1143, wallThickness: 0.00602, spacing: 0.0941,
  *   traverses: 2, fluidAngle: 0.3817, wallAngle: 0.7854 });
- * if (!svg.includes("<polyline") || !svg.includes("94.10 mm") || svg.includes("NaN")) {
+ * if (!svg.includes("<polyline") || !svg.includes("94.1 mm") || svg.includes("NaN")) {
  *   throw new Error("axial");
  * }
  * ```

@@ -9,7 +9,7 @@ import { InputError } from "../errors.ts";
 import { toUnit } from "../units.ts";
 
 /** A table cell: text, or a number shown as given (format numbers first to control digits). */
-export type Cell = string | number;
+export type TableCell = string | number;
 
 /** Display forms of unit names that read better in print. */
 const UNIT_DISPLAY: Record<string, string> = {
@@ -92,8 +92,10 @@ export function formatNumber(value: number, digits = 4): string {
  */
 export function formatCompact(value: number, digits = 4): string {
   const s = formatNumber(value, digits);
-  if (s.includes("e") || !s.includes(".")) return s;
-  return s.replace(/0+$/, "").replace(/\.$/, "");
+  const [mantissa, exponent] = s.split("e");
+  if (!mantissa.includes(".")) return s;
+  const m = mantissa.replace(/0+$/, "").replace(/\.$/, "");
+  return exponent === undefined ? m : `${m}e${exponent}`;
 }
 
 /**
@@ -133,7 +135,7 @@ export function formatQuantity(
   return shown === "°" ? `${num}°` : shown === "" ? num : `${num} ${shown}`;
 }
 
-function cellText(c: Cell, where: string): string {
+function cellText(c: TableCell, where: string): string {
   if (typeof c === "number") {
     if (!Number.isFinite(c)) throw new InputError(where, String(c), "a finite number or a text");
     return String(c);
@@ -142,7 +144,7 @@ function cellText(c: Cell, where: string): string {
   return c;
 }
 
-function checkShape(headers: readonly string[], rows: readonly (readonly Cell[])[]): void {
+function checkShape(headers: readonly string[], rows: readonly (readonly TableCell[])[]): void {
   if (!Array.isArray(headers) || headers.length === 0) {
     throw new InputError("headers", String(headers), "a non-empty list of column names");
   }
@@ -191,7 +193,7 @@ export interface TextTableOptions {
  */
 export function textTable(
   headers: readonly string[],
-  rows: readonly (readonly Cell[])[],
+  rows: readonly (readonly TableCell[])[],
   options: TextTableOptions = {},
 ): string {
   checkShape(headers, rows);
@@ -229,7 +231,7 @@ export function textTable(
  */
 export function markdownTable(
   headers: readonly string[],
-  rows: readonly (readonly Cell[])[],
+  rows: readonly (readonly TableCell[])[],
 ): string {
   checkShape(headers, rows);
   const esc = (s: string) => s.replace(/\\/g, "\\\\").replace(/\|/g, "\\|").replace(/\r?\n/g, " ");
@@ -261,7 +263,10 @@ export function markdownTable(
  * if (c !== 'name,note\r\nDN 100,"say ""hi"", then go"\r\n') throw new Error(c);
  * ```
  */
-export function csvTable(headers: readonly string[], rows: readonly (readonly Cell[])[]): string {
+export function csvTable(
+  headers: readonly string[],
+  rows: readonly (readonly TableCell[])[],
+): string {
   checkShape(headers, rows);
   const field = (s: string) => (/[",\r\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s);
   const rec = (cells: string[]) => cells.map(field).join(",") + "\r\n";

@@ -5,7 +5,21 @@
  *
  * @module
  */
-export * from "./format.ts";
+export {
+  BASE_CSS,
+  csvTable,
+  displayUnit,
+  escapeHtml,
+  formatCompact,
+  formatNumber,
+  formatQuantity,
+  htmlPage,
+  type HtmlPageOptions,
+  markdownTable,
+  type TableCell,
+  textTable,
+  type TextTableOptions,
+} from "./format.ts";
 export {
   type Bar,
   type BarChartOptions,
@@ -15,4 +29,11 @@ export {
   svgBarChart,
   svgLineChart,
 } from "./svg.ts";
-export * from "./drawings.ts";
+export {
+  type AxialPathOptions,
+  type PipeSectionOptions,
+  type RunOptions,
+  svgAxialPath,
+  svgPipeSection,
+  svgRun,
+} from "./drawings.ts";

@@ -10,9 +10,6 @@
  */
 import { z } from "zod";
 
-/** The zod schema type (re-exported so the schema's type is public). */
-export type { ZodType } from "zod";
-
 /** Formulations of the water properties a site may ask for (see DESIGN.md, `water`). */
 export const WATER_FORMULATIONS = ["iapws95", "if97", "del-grosso-mader", "marczak"] as const;
 
@@ -207,8 +204,37 @@ const idText = z.string().regex(/^[a-z0-9][a-z0-9.+-]*$/);
 
 const fitting = z.strictObject({ fitting: idText, orientation: finite.optional() });
 
-/** The zod schema of {@link SiteInput}: the reader's output satisfies it. */
-export const SiteInputSchema: z.ZodType<SiteInput> = z.strictObject({
+/** One problem found by {@link SiteInputSchema}. */
+export interface SiteSchemaIssue {
+  /** Key path of the problem. */
+  readonly path: readonly PropertyKey[];
+  /** What is wrong. */
+  readonly message: string;
+}
+
+/** The part of a zod schema that {@link SiteInputSchema} promises: `parse` and `safeParse`. */
+export interface SiteInputValidator {
+  /** Return the data typed as a site, or throw zod's error. */
+  parse(data: unknown): SiteInput;
+  /** Check the data without throwing. */
+  safeParse(
+    data: unknown,
+  ):
+    | { success: true; data: SiteInput }
+    | { success: false; error: { issues: readonly SiteSchemaIssue[] } };
+}
+
+/**
+ * The zod schema of {@link SiteInput} (a zod v4 strict object; typed here by the part of its
+ * interface we promise): every site the reader returns satisfies it.
+ *
+ * @example
+ * ```ts
+ * import { SiteInputSchema } from "./schema.ts";
+ * if (SiteInputSchema.safeParse({ name: "x" }).success) throw new Error("incomplete site");
+ * ```
+ */
+export const SiteInputSchema: SiteInputValidator = z.strictObject({
   name: z.string().min(1),
   id: z.string().min(1).optional(),
   invented: z.boolean().optional(),

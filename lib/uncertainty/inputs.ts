@@ -5,7 +5,6 @@
  * @module
  */
 import { InputError } from "../errors.ts";
-import type { Basis } from "../registry/schemas/common.ts";
 
 /**
  * Probability distribution assigned to an input (JCGM 101:2008 §6.4):
@@ -41,7 +40,13 @@ export interface UncertainInput {
   /** Source id in data/sources.yaml, for reports. */
   readonly source?: string;
   /** How the value got here, for reports. */
-  readonly basis?: Basis | "input" | "measured";
+  readonly basis?:
+    | "transcribed"
+    | "computed"
+    | "common-practice"
+    | "recalled"
+    | "input"
+    | "measured";
 }
 
 /** A correlation coefficient r(X_a, X_b) between two inputs named a and b. */

@@ -5,8 +5,25 @@
  *
  * @module
  */
-export * from "./inputs.ts";
-export * from "./gum.ts";
-export * from "./montecarlo.ts";
-export * from "./quantiles.ts";
-export * from "./rng.ts";
+export {
+  type Correlation,
+  type Distribution,
+  DISTRIBUTIONS,
+  type UncertainInput,
+} from "./inputs.ts";
+export {
+  type BudgetLine,
+  type GumOptions,
+  gumPropagate,
+  type GumResult,
+  type MeasurementModel,
+} from "./gum.ts";
+export { monteCarlo, type MonteCarloOptions, type MonteCarloResult } from "./montecarlo.ts";
+export {
+  coverageFactor,
+  normalCdf,
+  normalQuantile,
+  studentTCdf,
+  studentTQuantile,
+} from "./quantiles.ts";
+export { type RandomStream, randomStream } from "./rng.ts";

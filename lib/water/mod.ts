@@ -19,6 +19,7 @@ export {
   type WaterFormulationInfo,
   waterFormulations,
   waterKinematicViscosity,
+  type WaterNamespace,
   waterSoundSpeed,
   waterTrace,
   type WaterTraceSubject,

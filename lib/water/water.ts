@@ -338,6 +338,24 @@ export function waterTrace(formulation: WaterTraceSubject = "iapws95"): readonly
   return Object.freeze(out);
 }
 
+/** Shape of the {@link water} namespace. */
+export interface WaterNamespace {
+  /** {@link waterSoundSpeed}: m/s at (T K, p Pa). */
+  readonly soundSpeed: typeof waterSoundSpeed;
+  /** {@link waterDensity}: kg/m³ at (T K, p Pa). */
+  readonly density: typeof waterDensity;
+  /** {@link waterViscosity}: Pa·s at (T K, p Pa). */
+  readonly viscosity: typeof waterViscosity;
+  /** {@link waterKinematicViscosity}: m²/s at (T K, p Pa). */
+  readonly kinematicViscosity: typeof waterKinematicViscosity;
+  /** Saturation pressure, Pa, at T K (Wagner–Pruß 1993 auxiliary equation). */
+  readonly saturationPressure: typeof saturationPressure;
+  /** The formulations with source and validity. */
+  readonly formulations: readonly WaterFormulationInfo[];
+  /** {@link waterTrace}: trace entries for reports. */
+  readonly trace: typeof waterTrace;
+}
+
 /**
  * The water namespace: `water.soundSpeed`, `density`, `viscosity`, `kinematicViscosity`,
  * `saturationPressure`, `formulations`, `trace`.
@@ -349,7 +367,7 @@ export function waterTrace(formulation: WaterTraceSubject = "iapws95"): readonly
  * if (!(water.soundSpeed(300, 1e6) > 1500)) throw new Error("w");
  * ```
  */
-export const water = Object.freeze({
+export const water: WaterNamespace = Object.freeze({
   soundSpeed: waterSoundSpeed,
   density: waterDensity,
   viscosity: waterViscosity,

@@ -1,5 +1,10 @@
 import { assert, throws } from "../_assert.ts";
-import { NoPhysicalAnswerError, NotFoundError, OutOfRangeError, type Warning } from "../../lib/errors.ts";
+import {
+  NoPhysicalAnswerError,
+  NotFoundError,
+  OutOfRangeError,
+  type Warning,
+} from "../../lib/errors.ts";
 import { liquidProperties, liquids, waltherViscosity } from "../../lib/liquids/mod.ts";
 
 Deno.test("liquidProperties: every liquid positive and finite over its validity range", () => {
@@ -47,7 +52,10 @@ Deno.test("liquidProperties: errors", () => {
   throws(() => liquidProperties("ammonia", 293.15), NoPhysicalAnswerError); // boils at 1 atm
   throws(() => liquidProperties("acetone", 318.15, 50e3), NoPhysicalAnswerError); // psat(45 °C) ≈ 68 kPa
   throws(() => liquidProperties("water", 393.15), NoPhysicalAnswerError);
-  throws(() => liquidProperties("methanol", 293.15, 101325, { formulation: "if97" }), /formulation/);
+  throws(
+    () => liquidProperties("methanol", 293.15, 101325, { formulation: "if97" }),
+    /formulation/,
+  );
   const warnings: Warning[] = [];
   const s = liquidProperties("glycerol", 383.15, 101325, { extrapolate: true, warnings });
   assert.ok(warnings.length === 1 && s.warnings.length === 1);

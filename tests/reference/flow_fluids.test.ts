@@ -146,7 +146,10 @@ print(json.dumps({"lg":lg,"cu":cu}))`,
         assert.ok(Math.abs(gl.weights[i] - wGl) < 1e-14, `GL weight ${n}/${i}`);
         assert.ok(Math.abs(gj.positions[i] - order[i][0]) < 1e-14, `GJ node ${n}/${i}`);
         // roots_chebyu weights integrate against √(1−x²); our weights are (2/π)·those
-        assert.ok(Math.abs(gj.weights[i] - (2 / Math.PI) * order[i][1]) < 1e-14, `GJ weight ${n}/${i}`);
+        assert.ok(
+          Math.abs(gj.weights[i] - (2 / Math.PI) * order[i][1]) < 1e-14,
+          `GJ weight ${n}/${i}`,
+        );
       }
     }
   },

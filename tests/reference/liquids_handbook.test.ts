@@ -39,7 +39,9 @@ print(json.dumps(out))`,
       assert.ok(dc <= s.soundSpeedSpread + 2, `c at ${t} °C, ${p} Pa: ${s.soundSpeed} vs ${w}`);
     });
     assert.ok(worstRho < 0.008, `density ${worstRho}`);
-    console.log(`  worst: sound speed ${worstC.toFixed(2)} m/s, density ${(worstRho * 100).toFixed(3)} %`);
+    console.log(
+      `  worst: sound speed ${worstC.toFixed(2)} m/s, density ${(worstRho * 100).toFixed(3)} %`,
+    );
   },
 });
 
@@ -68,7 +70,12 @@ Deno.test("handbook sound speeds at 20 °C (recalled Kaye & Laby / CRC values)",
 // Source: API gravity definition (density at 60 °F = 141.5/(API+131.5) g/cm³), the standard of the
 // petroleum trade: the Batzle-Wang density at 15.6 °C, 1 atm must sit close to it.
 Deno.test("crude oil density near the API-gravity definition at 15.6 °C", () => {
-  for (const [id, api] of [["crude-oil-light", 40], ["crude-oil-medium", 30], ["crude-oil-heavy", 18]] as const) {
+  for (
+    const [id, api] of [["crude-oil-light", 40], ["crude-oil-medium", 30], [
+      "crude-oil-heavy",
+      18,
+    ]] as const
+  ) {
     const rho = liquidProperties(id, 288.71).density;
     const def = 141.5 / (api + 131.5) * 1000;
     assert.ok(Math.abs(rho - def) / def < 0.01, `${id}: ${rho} vs ${def}`);

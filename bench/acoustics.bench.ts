@@ -1,0 +1,41 @@
+/**
+ * Benchmarks of the acoustic path: clampOnPath + transitTimes per evaluation.
+ */
+import { type ClampOnInputs, clampOnPath } from "../lib/acoustics/path.ts";
+import { pathVelocity, transitTimes } from "../lib/acoustics/transit.ts";
+
+const BASE: ClampOnInputs = {
+  outsideDiameter: 0.1143,
+  wallThickness: 0.00602,
+  wallSoundSpeed: 5920,
+  wallShearSpeed: 3230,
+  fluidSoundSpeed: 1482,
+  wedgeSoundSpeed: 2720,
+  wedgeAngle: 38 * Math.PI / 180,
+  traverses: 2,
+};
+const LINED: ClampOnInputs = { ...BASE, lining: { thickness: 0.006, soundSpeed: 4000 } };
+let sink = 0;
+
+Deno.bench("clampOnPath + transitTimes (bare steel, V)", { group: "path", baseline: true }, () => {
+  const p = clampOnPath(BASE);
+  sink += transitTimes(p, 1.2).deltaT;
+});
+
+Deno.bench("clampOnPath + transitTimes (cement-lined, V)", { group: "path" }, () => {
+  const p = clampOnPath(LINED);
+  sink += transitTimes(p, 1.2).deltaT;
+});
+
+const P = clampOnPath(BASE);
+const T = transitTimes(P, 1.2);
+Deno.bench("transitTimes alone", { group: "times" }, () => {
+  sink += transitTimes(P, 1.2).deltaT;
+});
+Deno.bench("pathVelocity (inverse, three forms)", { group: "times" }, () => {
+  sink += pathVelocity(P, T.upstream, T.downstream).velocity;
+});
+
+addEventListener("unload", () => {
+  if (sink === 42) console.log(sink);
+});
