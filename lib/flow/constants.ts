@@ -15,17 +15,25 @@ export interface FlowConstants {
   readonly nSpread: number;
   /** Source id and basis of the n table. */
   readonly nSource: string;
+  /** The n basis. */
   readonly nBasis: string;
   /** von Kármán constant κ and log-law intercept B. */
   readonly kappa: number;
+  /** The log law b. */
   readonly logLawB: number;
+  /** The log law source. */
   readonly logLawSource: string;
+  /** The log law basis. */
   readonly logLawBasis: string;
   /** Regime limits on Re. */
   readonly laminarLimit: number;
+  /** The colebrook limit. */
   readonly colebrookLimit: number;
+  /** The turbulent limit. */
   readonly turbulentLimit: number;
+  /** The reynolds max. */
   readonly reynoldsMax: number;
+  /** The relative roughness max. */
   readonly relativeRoughnessMax: number;
 }
 

@@ -444,9 +444,11 @@ export function profileFactorEstimate(
 export interface ProfileFactorRange {
   /** Factor at the lowest and highest Reynolds number. */
   readonly atMin: number;
+  /** The at max. */
   readonly atMax: number;
   /** Smallest and largest factor over the range (sampled). */
   readonly min: number;
+  /** The max. */
   readonly max: number;
   /** (max − min) / mean of max and min: how much the factor changes over the range. */
   readonly relativeChange: number;

@@ -44,7 +44,7 @@ export const DEFAULT_FLUID_ANGLE = 20 * Math.PI / 180;
 export const MODEL_RELATIVE_SPREAD = 0.5;
 
 /** The note every model result carries. */
-export const MODEL_NOTE = "estimate from the snellpath distorted-profile model (simple, " +
+export const MODEL_NOTE: string = "estimate from the snellpath distorted-profile model (simple, " +
   "exponentially decaying components; only the single-elbow terms are fitted to published " +
   "magnitudes); not a calibration";
 
@@ -74,10 +74,15 @@ export interface ProfileErrorInput {
 
 /** Contribution of each model component to the relative error. */
 export interface ErrorComponents {
+  /** The axisymmetric. */
   readonly axisymmetric: number;
+  /** The second harmonic. */
   readonly secondHarmonic: number;
+  /** The skew. */
   readonly skew: number;
+  /** The swirl. */
   readonly swirl: number;
+  /** The cross flow. */
   readonly crossFlow: number;
 }
 
@@ -91,11 +96,17 @@ export interface ProfileErrorResult {
   readonly components: ErrorComponents;
   /** Fully developed profile factor the meter applies. */
   readonly profileFactor: number;
+  /** The fitting. */
   readonly fitting: string;
+  /** The distance diameters. */
   readonly distanceDiameters: number;
+  /** The orientation. */
   readonly orientation: number;
+  /** The traverses. */
   readonly traverses: number;
+  /** The reynolds. */
   readonly reynolds: number;
+  /** The note. */
   readonly note: string;
 }
 
@@ -218,9 +229,13 @@ function pathIntegral(
 
 /** One row of {@link profileErrorSweep}. */
 export interface SweepRow {
+  /** The distance diameters. */
   readonly distanceDiameters: number;
+  /** The orientation. */
   readonly orientation: number;
+  /** The reynolds. */
   readonly reynolds: number;
+  /** The error. */
   readonly error: number;
 }
 
@@ -244,8 +259,11 @@ export interface SweepRow {
 export function profileErrorSweep(
   base: Omit<ProfileErrorInput, "distanceDiameters" | "orientation" | "reynolds">,
   grid: {
+    /** The distances. */
     readonly distances: readonly number[];
+    /** The orientations. */
     readonly orientations?: readonly number[];
+    /** The reynolds. */
     readonly reynolds?: readonly number[];
   },
 ): SweepRow[] {

@@ -68,13 +68,21 @@ export interface RankedPosition {
 
 /** Result of {@link rankPositions}. */
 export interface RankResult {
+  /** The common practice position. */
   readonly commonPracticePosition: number;
+  /** The recommended position. */
   readonly recommendedPosition: number;
+  /** The recommended orientation. */
   readonly recommendedOrientation: number;
+  /** The ranking. */
   readonly ranking: readonly RankedPosition[];
+  /** The meets common practice. */
   readonly meetsCommonPractice: boolean;
+  /** The required upstream. */
   readonly requiredUpstream: number;
+  /** The required downstream. */
   readonly requiredDownstream: number;
+  /** The notes. */
   readonly notes: readonly string[];
 }
 

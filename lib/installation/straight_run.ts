@@ -25,14 +25,19 @@ export interface StraightRunInput {
 
 /** Result of {@link checkStraightRun}. */
 export interface StraightRunResult {
+  /** The verdict. */
   readonly verdict: StraightRunVerdict;
   /** Available straight lengths, in diameters. */
   readonly upstreamDiameters: number;
+  /** The downstream diameters. */
   readonly downstreamDiameters: number | null;
   /** Required straight lengths, in diameters. */
   readonly requiredUpstream: number;
+  /** The required downstream. */
   readonly requiredDownstream: number;
+  /** The reasons. */
   readonly reasons: readonly string[];
+  /** The trace. */
   readonly trace: readonly TraceEntry[];
 }
 

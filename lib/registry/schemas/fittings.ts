@@ -36,8 +36,70 @@ export const DisturbanceComponent = z.strictObject({
   ...prov,
 });
 
-/** One fitting. */
-export const Fitting = z.strictObject({
+/** Provenance fields carried by an entry or a datum. */
+export interface FittingProvenance {
+  /** Source id in data/sources.yaml. */
+  readonly source?: string;
+  /** How the datum got here. */
+  readonly basis?: "transcribed" | "computed" | "common-practice" | "recalled";
+  /** Where the copy came from. */
+  readonly copy?: string;
+  /** Free note. */
+  readonly note?: string;
+}
+
+/** A straight length in diameters. */
+export interface FittingLength extends FittingProvenance {
+  /** Length in inside diameters. */
+  readonly diameters: number;
+  /** Half-width of the spread between practices, diameters. */
+  readonly spread?: number;
+}
+
+/** One decaying component of the distorted-profile model. */
+export interface FittingComponent extends FittingProvenance {
+  /** Amplitude at the fitting, fraction of the bulk velocity. */
+  readonly amplitude: number;
+  /** e-folding decay length, diameters. */
+  readonly decay: number;
+}
+
+/** One fitting entry of data/fittings.yaml. */
+export interface Fitting extends FittingProvenance {
+  /** Entry id. */
+  readonly id: string;
+  /** Human name. */
+  readonly name: string;
+  /** Other ids resolving to this entry. */
+  readonly aliases?: readonly string[];
+  /** Whether the fitting has a reference plane. */
+  readonly planar: boolean;
+  /** Straight-run requirements, diameters. */
+  readonly straightRun: FittingProvenance & {
+    /** Needed after the fitting (fitting upstream of the meter). */
+    readonly upstream: FittingLength;
+    /** Needed before the fitting (fitting downstream of the meter). */
+    readonly downstream: FittingLength;
+  };
+  /** Distorted-profile model parameters. */
+  readonly disturbance: FittingProvenance & {
+    /** Axisymmetric reshaping. */
+    readonly axisymmetric: FittingComponent;
+    /** cos 2θ component. */
+    readonly secondHarmonic: FittingComponent;
+    /** Skewed (cos θ) component. */
+    readonly skew: FittingComponent;
+    /** Swirl. */
+    readonly swirl: FittingComponent;
+    /** Cross-flow. */
+    readonly crossFlow: FittingComponent;
+    /** Reading shift when downstream of the meter. */
+    readonly downstreamEffect: FittingComponent;
+  };
+}
+
+/** Schema of one fitting. */
+export const Fitting: z.ZodType<Fitting> = z.strictObject({
   id: EntryId,
   name: z.string().min(3),
   /** Other ids that resolve to this entry. */
@@ -80,11 +142,9 @@ export const Fitting = z.strictObject({
     }
   }
 });
-/** One fitting. */
-export type Fitting = z.infer<typeof Fitting>;
 
 /** The fittings data file. */
-export const FittingsFile = z.strictObject({
+export const FittingsFile: z.ZodType = z.strictObject({
   kind: z.literal("fittings"),
   note: z.string().optional(),
   fittings: z.array(Fitting).min(1),
