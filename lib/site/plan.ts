@@ -1,0 +1,968 @@
+/**
+ * The site plan: one validated site in, a traced plan out.
+ *
+ * pipe (catalogue or measured) → liquid properties at operating conditions → Snell chain per
+ * mounting (spacing, search window, transit times, Δt at each flow, resolvability at minimum
+ * flow, wall-borne signal, signal budget) → Reynolds number and profile factor per operating
+ * point → straight run, common-practice and model-ranked positions → GUM uncertainty budget at
+ * each operating point, Monte Carlo (JCGM 101) beside it → a verdict on the target and what
+ * would reach it. Every constant used is listed in `trace` with its source and basis.
+ *
+ * @module
+ */
+import { InputError, NoPhysicalAnswerError, type Warning } from "../errors.ts";
+import { trace as traceEntry, type TraceEntry } from "../trace.ts";
+import { defaultRegistry, type Registry } from "../registry/mod.ts";
+import { pipe as resolvePipe, type PipeSpec, type ResolvedPipe } from "../pipe/mod.ts";
+import { liquidProperties, type LiquidState } from "../liquids/mod.ts";
+import {
+  clampOnPath,
+  type ClampOnInputs,
+  type ClampOnPath,
+  minimumResolvableVelocity,
+  searchWindow,
+  type SearchWindow,
+  signalBudget,
+  techniqueScreening,
+  transitTimes,
+  wallBorneSignal,
+} from "../acoustics/mod.ts";
+import { frictionFactor, profileFactorEstimate, reynoldsNumber } from "../flow/mod.ts";
+import {
+  checkStraightRun,
+  profileErrorEstimate,
+  rankPositions,
+  resolveFitting,
+} from "../installation/mod.ts";
+import { gumPropagate, monteCarlo, type UncertainInput } from "../uncertainty/mod.ts";
+import { flowModel, MODEL_INPUTS } from "./model.ts";
+import type { SiteInput } from "./schema.ts";
+
+/** Assumptions of the plan that no site file states: each is common practice or recalled. */
+export const PLAN_ASSUMPTIONS = {
+  /** Half-width of the wedge-angle uncertainty (machining and mounting), rad. */
+  wedgeAngleHalfWidth: 0.2 * Math.PI / 180,
+  /** Half-width of the wedge temperature's departure from the liquid's, K. */
+  wedgeTemperatureHalfWidth: 5,
+  /** Relative half-width of a wedge sound speed stated without a material, dimensionless. */
+  statedWedgeSpeedRelative: 0.003,
+  /** Relative half-width of a lining's thickness (linings are uneven), dimensionless. */
+  liningThicknessRelative: 0.2,
+  /** Relative half-width of a lining's sound speed when only its material is known. */
+  liningSpeedRelative: 0.05,
+  /** Half-width of a thickness-gauge reading, m. */
+  gaugeHalfWidth: 0.1e-3,
+  /** Half-width of the fixed delay (electronics, cables, couplant) after zero setting, s. */
+  fixedDelayHalfWidth: 50e-9,
+  /** Timing resolution assumed when the site states none, s. */
+  defaultTimingResolution: 100e-12,
+  /** Δt at minimum flow must exceed this multiple of the timing offset to count resolvable. */
+  resolvableMultiple: 100,
+  /** Outside-diameter half-width when the catalogue gives no tolerance, relative. */
+  defaultOdRelative: 0.005,
+} as const;
+
+const ASSUMPTION_TEXT: Record<keyof typeof PLAN_ASSUMPTIONS, [string, string]> = {
+  wedgeAngleHalfWidth: ["wedge angle uncertainty, half-width", "rad"],
+  wedgeTemperatureHalfWidth: ["wedge temperature departure from the liquid's, half-width", "K"],
+  statedWedgeSpeedRelative: ["stated wedge sound speed, relative half-width", ""],
+  liningThicknessRelative: ["lining thickness, relative half-width", ""],
+  liningSpeedRelative: ["lining sound speed from its material, relative half-width", ""],
+  gaugeHalfWidth: ["thickness-gauge reading, half-width", "m"],
+  fixedDelayHalfWidth: ["fixed delay after zero setting, half-width", "s"],
+  defaultTimingResolution: ["timing resolution when none is stated", "s"],
+  resolvableMultiple: ["Δt at minimum flow over timing offset, least ratio to count resolvable", ""],
+  defaultOdRelative: ["outside diameter, relative half-width when no tolerance is known", ""],
+};
+
+/** Options of {@link planSite}. */
+export interface PlanOptions {
+  /** Registry to use (default: the bundled one). */
+  readonly registry?: Registry;
+  /** Monte Carlo beside GUM: `false` to skip; default 1e5 draws, seed 1. */
+  readonly monteCarlo?: false | { readonly draws?: number; readonly seed?: number };
+}
+
+/** One operating point of the plan. */
+export interface OperatingPoint {
+  /** `minimum`, `design` or `maximum`. */
+  readonly label: "minimum" | "design" | "maximum";
+  /** Volume flow rate, m³/s. */
+  readonly flowRate: number;
+  /** Area-mean velocity, m/s. */
+  readonly meanVelocity: number;
+  /** Reynolds number on the bore. */
+  readonly reynolds: number;
+  /** Flow regime. */
+  readonly regime: string;
+  /** Profile factor (area mean / path mean), diametral path. */
+  readonly profileFactor: number;
+  /** Half-width of the spread between profile models. */
+  readonly profileFactorSpread: number;
+  /** Path-averaged axial velocity, m/s. */
+  readonly pathVelocity: number;
+  /** Darcy friction factor (Colebrook–White). */
+  readonly frictionFactor: number;
+}
+
+/** Transit times of one mounting at one operating point. */
+export interface MountingTimes {
+  /** Operating point label. */
+  readonly label: OperatingPoint["label"];
+  /** Upstream transit time, s. */
+  readonly upstream: number;
+  /** Downstream transit time, s. */
+  readonly downstream: number;
+  /** Δt, s. */
+  readonly deltaT: number;
+}
+
+/** One mounting (traverse count) of the plan. */
+export interface MountingPlan {
+  /** Crossings of the bore. */
+  readonly traverses: number;
+  /** Mounting letter where the trade has one (Z 1, V 2, W 4), else `N-traverse`. */
+  readonly name: string;
+  /** Spacing between beam entry and exit on the outer surface, m. */
+  readonly spacing: number;
+  /** Distance between the housings' reference marks, m (when the wedge geometry is known). */
+  readonly referenceMarkDistance?: number;
+  /** Liquid angle from the wall normal, rad. */
+  readonly fluidAngle: number;
+  /** Wall angle, rad. */
+  readonly wallAngle: number;
+  /** Wall mode the spacing is for. */
+  readonly wallMode: string;
+  /** Modes considered, with their role. */
+  readonly modes: ClampOnPath["modes"];
+  /** Liquid path length, m. */
+  readonly fluidPathLength: number;
+  /** Zero-flow times: liquid, wall, lining, total, s. */
+  readonly fluidTime: number;
+  readonly wallTime: number;
+  readonly liningTime: number;
+  readonly totalTime: number;
+  /** Search window. */
+  readonly searchWindow: SearchWindow;
+  /** Transit times at each operating point. */
+  readonly times: readonly MountingTimes[];
+  /** Smallest path velocity resolvable for the timing offset, m/s. */
+  readonly minimumResolvableVelocity: number;
+  /** Timing offset / Δt at minimum flow. */
+  readonly offsetFraction: number;
+  /** Δt at minimum flow ≥ resolvableMultiple × timing offset. */
+  readonly resolvableAtMinimum: boolean;
+  /** Wall-borne signal check. */
+  readonly wallBorne: { readonly separation: number; readonly overlaps: boolean };
+  /** Signal budget: total dB and rating. */
+  readonly signal: { readonly totalDb: number; readonly rating: string };
+  /** Spacing across the seasonal temperature range (when given). */
+  readonly overTemperature?: readonly {
+    readonly temperature: number;
+    readonly spacing: number;
+    readonly fluidSoundSpeed: number;
+    readonly totalTime: number;
+  }[];
+  /** Expanded relative uncertainty per operating point (GUM, k = 2). */
+  readonly expandedByPoint: readonly number[];
+}
+
+/** A budget line in the plan. */
+export interface PlanBudgetLine {
+  readonly name: string;
+  readonly value: number;
+  readonly unit: string;
+  readonly standardUncertainty: number;
+  readonly distribution: string;
+  readonly sensitivity: number;
+  /** Relative contribution |c·u| / Q. */
+  readonly relativeContribution: number;
+  /** Share of the variance. */
+  readonly share: number;
+  readonly source: string;
+  readonly basis: string;
+}
+
+/** The plan of one site. SI throughout. */
+export interface SitePlan {
+  readonly name: string;
+  readonly id?: string;
+  readonly invented: boolean;
+  readonly registryHash: string;
+  readonly pipe: {
+    readonly outsideDiameter: number;
+    readonly wallThickness: number;
+    readonly insideDiameter: number;
+    readonly boreDiameter: number;
+    readonly material: string;
+    readonly wallSoundSpeed: number;
+    readonly wallShearSpeed?: number;
+    readonly lining: readonly { material: string; thickness: number; soundSpeed: number }[];
+    readonly description: string;
+    readonly measuredWallThickness?: number;
+  };
+  readonly fluid: {
+    readonly liquid: string;
+    readonly name: string;
+    readonly temperature: number;
+    readonly pressure: number;
+    readonly soundSpeed: number;
+    readonly soundSpeedSpread: number;
+    readonly density: number;
+    readonly kinematicViscosity: number;
+  };
+  readonly transducer: {
+    readonly wedgeSoundSpeed: number;
+    readonly wedgeAngle: number;
+    readonly frequency: number;
+    readonly timingResolution: number;
+    readonly zeroOffset: number;
+  };
+  readonly operatingPoints: readonly OperatingPoint[];
+  readonly profileFactorChange: number;
+  readonly mountings: readonly MountingPlan[];
+  readonly recommendedMounting: number;
+  readonly straightRun?: {
+    readonly verdict: string;
+    readonly position: number;
+    readonly positionSource: "planned" | "recommended";
+    readonly upstreamDiameters: number;
+    readonly downstreamDiameters: number | null;
+    readonly requiredUpstream: number;
+    readonly requiredDownstream: number;
+    readonly commonPracticePosition: number;
+    readonly recommendedPosition: number;
+    readonly recommendedOrientation: number;
+    readonly estimatedProfileError: number;
+    readonly estimatedProfileErrorSpread: number;
+    readonly reasons: readonly string[];
+    readonly notes: readonly string[];
+    readonly errorAlongRun: readonly { position: number; error: number }[];
+    readonly runLength: number;
+    readonly upstreamFitting: string;
+    readonly downstreamFitting: string;
+  };
+  readonly uncertainty: {
+    readonly mounting: number;
+    readonly operatingPoint: OperatingPoint["label"];
+    readonly expanded: number;
+    readonly coverageFactor: number;
+    readonly expandedByPoint: readonly { label: string; expanded: number }[];
+    readonly budget: readonly PlanBudgetLine[];
+    readonly monteCarlo?: {
+      readonly draws: number;
+      readonly seed: number;
+      readonly expanded: number;
+      readonly interval: readonly [number, number];
+    };
+  };
+  readonly target?: {
+    readonly uncertainty: number;
+    readonly reachable: boolean;
+    readonly worstExpanded: number;
+    readonly worstPoint: string;
+    readonly suggestions: readonly string[];
+  };
+  readonly technique: { readonly favours: string; readonly reasons: readonly string[] };
+  readonly mainLimitation: string;
+  readonly trace: readonly TraceEntry[];
+  readonly cautions: readonly string[];
+  readonly warnings: readonly Warning[];
+}
+
+const MOUNTING_NAMES: Record<number, string> = { 1: "Z", 2: "V", 4: "W" };
+
+/** Name of a mounting by traverse count: Z, V, W, else `N-traverse`. */
+export function mountingName(traverses: number): string {
+  return MOUNTING_NAMES[traverses] ?? `${traverses}-traverse`;
+}
+
+function halfWidthTol(t: { plus?: number; minus?: number } | undefined): number | undefined {
+  if (!t) return undefined;
+  const p = t.plus ?? 0, m = t.minus ?? 0;
+  const h = (Math.abs(p) + Math.abs(m)) / 2;
+  return h > 0 ? h : undefined;
+}
+
+/**
+ * Plan one site.
+ *
+ * Method: the composition described in the module text. Measurement model for the budget:
+ * Q = k·(1 + ε)·(π/4)·D²·c_w·Δt / (2·sin θ_w·τ) (see ./model.ts), propagated by the GUM law of
+ * propagation (jcgm-100-2008) at each operating point, and by Monte Carlo (jcgm-101-2008) at the
+ * worst one. Assumptions no site file states are in {@link PLAN_ASSUMPTIONS}, each traced as
+ * common practice.
+ *
+ * @param site a validated site from the site-file reader (SI)
+ * @param options registry, Monte Carlo settings
+ * @returns the plan (SI), with trace, registry hash, cautions and warnings
+ * @throws {InputError} on unknown pipe sizes, materials, liquids or fittings
+ * @throws {NoPhysicalAnswerError} beyond a critical angle, or for a boiling liquid
+ *
+ * @example
+ * ```ts
+ * import { readSiteText } from "./read.ts";
+ * import { planSite } from "./plan.ts";
+ * const site = await readSiteText(`
+ * name: Example line (invented)
+ * pipe: { standard: ASME B36.10M, nps: "8", schedule: "40", material: carbon-steel }
+ * fluid: { liquid: water, temperature: 12 degC, pressure: 5 bar }
+ * flow: { minimum: 20 L/s, design: 60 L/s, maximum: 90 L/s }
+ * transducer: { wedgeSoundSpeed: 2720 m/s, wedgeAngle: 38 deg, frequency: 1 MHz }
+ * mountings: [1, 2]
+ * `);
+ * const plan = planSite(site, { monteCarlo: false });
+ * if (!(plan.mountings[1].spacing > plan.mountings[0].spacing)) throw new Error("V wider than Z");
+ * ```
+ */
+export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
+  const reg = options.registry ?? defaultRegistry();
+  const warnings: Warning[] = site.defaults.map((d) => ({ code: "default", message: d.message }));
+  const tr: TraceEntry[] = [];
+  const addTrace = (entries: readonly TraceEntry[] | undefined) => {
+    if (entries) for (const e of entries) tr.push(e);
+  };
+
+  // --- pipe --------------------------------------------------------------------------
+  const sp = site.pipe;
+  const liningIn = sp.lining ? [{ material: sp.lining.material, thickness: sp.lining.thickness }] : undefined;
+  let spec: PipeSpec;
+  if (sp.geometry === "measured") {
+    if (!sp.material) throw new InputError("pipe.material", "nothing", "a material id for a measured pipe");
+    spec = {
+      outsideDiameter: sp.outsideDiameter,
+      circumference: sp.circumference,
+      wallThickness: sp.wallThickness!,
+      material: sp.material,
+      lining: liningIn,
+    };
+  } else {
+    spec = {
+      standard: sp.standard!,
+      nps: sp.nps!,
+      schedule: sp.schedule!,
+      material: sp.material,
+      lining: liningIn,
+    };
+  }
+  const pipeWarnings: Warning[] = [];
+  const rp: ResolvedPipe = resolvePipe(spec, { registry: reg, warnings: pipeWarnings });
+  warnings.push(...pipeWarnings);
+  addTrace(rp.trace);
+  const materialId = sp.material ?? rp.material;
+  const mat = reg.material(materialId);
+  addTrace(mat.trace);
+  const T = site.fluid.temperature;
+  const wallL = sp.wallSoundSpeed ?? mat.longitudinal;
+  const wallS = sp.wallShearSpeed ?? mat.shear;
+  if (sp.wallSoundSpeed !== undefined) {
+    tr.push(traceEntry("wall longitudinal sound speed (site override)", wallL, "m/s", "site", "input"));
+  }
+  if (sp.wallShearSpeed !== undefined) {
+    tr.push(traceEntry("wall shear sound speed (site override)", wallS!, "m/s", "site", "input"));
+  }
+  let wallThickness = rp.wallThickness;
+  if (sp.measuredWallThickness !== undefined) {
+    const tolerance = halfWidthTol(rp.tolerances?.wallThickness);
+    const diff = sp.measuredWallThickness - rp.wallThickness;
+    if (tolerance !== undefined && Math.abs(diff) > tolerance) {
+      warnings.push({
+        code: "wall-differs",
+        message: `measured wall ${fmtMm(sp.measuredWallThickness)} differs from the nominal ` +
+          `${fmtMm(rp.wallThickness)} by more than its tolerance: the measured value is used`,
+      });
+    }
+    wallThickness = sp.measuredWallThickness;
+    tr.push(traceEntry("wall thickness (thickness-gauge reading)", wallThickness, "m", "site", "measured"));
+  }
+  if (!(wallThickness < rp.outsideDiameter / 2)) {
+    throw new InputError("pipe.measuredWallThickness", fmtMm(wallThickness), "less than the outside radius");
+  }
+  const lining = rp.lining.map((l, i) => {
+    const override = i === 0 ? sp.lining?.soundSpeed : undefined;
+    let c = override;
+    if (c === undefined) {
+      const lm = reg.material(l.material);
+      addTrace(lm.trace);
+      c = lm.longitudinal;
+    } else tr.push(traceEntry("lining sound speed (site override)", c, "m/s", "site", "input"));
+    return { material: l.material, thickness: l.thickness, soundSpeed: c, overridden: override !== undefined };
+  });
+  const insideDiameter = rp.outsideDiameter - 2 * wallThickness;
+  const bore = insideDiameter - 2 * lining.reduce((s, l) => s + l.thickness, 0);
+  if (!(bore > 0)) throw new InputError("pipe.lining.thickness", fmtMm(lining[0]?.thickness ?? 0), "a lining thinner than the inside radius");
+  const area = Math.PI / 4 * bore * bore;
+
+  // --- fluid ---------------------------------------------------------------------------
+  const fl = site.fluid;
+  const liqWarnings: Warning[] = [];
+  const liq: LiquidState = liquidProperties(fl.liquid, T, fl.pressure, {
+    salinity: fl.salinity,
+    formulation: fl.formulation,
+    warnings: liqWarnings,
+  });
+  warnings.push(...liqWarnings);
+  addTrace(liq.trace);
+  const c = fl.soundSpeed ?? liq.soundSpeed;
+  const rho = fl.density ?? liq.density;
+  const nu = fl.kinematicViscosity ?? liq.kinematicViscosity;
+  if (fl.soundSpeed !== undefined) tr.push(traceEntry("liquid sound speed (site override)", c, "m/s", "site", "input"));
+  if (fl.density !== undefined) tr.push(traceEntry("liquid density (site override)", rho, "kg/m^3", "site", "input"));
+  if (fl.kinematicViscosity !== undefined) {
+    tr.push(traceEntry("liquid kinematic viscosity (site override)", nu, "m^2/s", "site", "input"));
+  }
+  const cSpread = fl.soundSpeed !== undefined ? 0 : liq.soundSpeedSpread;
+
+  // --- transducer ----------------------------------------------------------------------
+  const td = site.transducer;
+  let cw: number;
+  let dcwdT: number;
+  let cwHalf: number;
+  let wedgeDensity = 1180;
+  let wedgeAtt: { value: number; frequency: number } | undefined;
+  if (td.wedgeMaterial) {
+    const wm = reg.material(td.wedgeMaterial);
+    addTrace(wm.trace);
+    wedgeDensity = wm.density;
+    wedgeAtt = wm.attenuation;
+    dcwdT = td.wedgeTemperatureCoefficient ?? wm.dLongitudinalDT ?? 0;
+    cw = td.wedgeSoundSpeed ?? wm.longitudinal + dcwdT * (T - wm.referenceTemperature);
+    cwHalf = td.wedgeSoundSpeed !== undefined
+      ? PLAN_ASSUMPTIONS.statedWedgeSpeedRelative * cw
+      : wm.longitudinalSpread ?? PLAN_ASSUMPTIONS.statedWedgeSpeedRelative * cw;
+    if (td.wedgeSoundSpeed === undefined && dcwdT !== 0) {
+      tr.push(traceEntry("wedge sound speed at the liquid temperature", cw, "m/s", wm.source, "computed"));
+    }
+  } else if (td.wedgeSoundSpeed !== undefined) {
+    cw = td.wedgeSoundSpeed;
+    dcwdT = td.wedgeTemperatureCoefficient ?? 0;
+    cwHalf = PLAN_ASSUMPTIONS.statedWedgeSpeedRelative * cw;
+    tr.push(traceEntry("wedge sound speed (site)", cw, "m/s", "site", "input"));
+    if (td.wedgeTemperatureCoefficient === undefined) {
+      warnings.push({
+        code: "wedge-temperature",
+        message: "no wedge material or temperature coefficient: the wedge speed is held constant " +
+          "over temperature",
+      });
+    }
+  } else {
+    throw new InputError("transducer", "neither wedgeSoundSpeed nor wedgeMaterial", "one of them");
+  }
+  tr.push(traceEntry("wedge angle (site)", td.wedgeAngle, "rad", "site", "input"));
+  const timingResolution = td.timingResolution ?? PLAN_ASSUMPTIONS.defaultTimingResolution;
+  if (td.timingResolution === undefined) {
+    warnings.push({
+      code: "default",
+      message: `no timing resolution stated: ${timingResolution * 1e12} ps assumed`,
+    });
+  }
+  const zeroOffset = Math.abs(td.zeroOffset ?? timingResolution);
+  const timingOffset = Math.max(zeroOffset, timingResolution);
+
+  for (const [k, v] of Object.entries(PLAN_ASSUMPTIONS)) {
+    const [text, unit] = ASSUMPTION_TEXT[k as keyof typeof PLAN_ASSUMPTIONS];
+    tr.push(traceEntry(`plan assumption: ${text}`, v, unit, "common-practice", "common-practice"));
+  }
+
+  // --- operating points ----------------------------------------------------------------
+  const roughness = sp.roughness ?? mat.roughness ?? 0;
+  if (sp.roughness === undefined && mat.roughness === undefined) {
+    warnings.push({ code: "roughness", message: `no roughness for ${materialId}: smooth bore assumed` });
+  }
+  const rr = roughness / bore;
+  const flows: { label: OperatingPoint["label"]; q: number }[] = [];
+  const toFlow = (x: number) => site.flow.quantity === "velocity" ? x * area : x;
+  flows.push({ label: "minimum", q: toFlow(site.flow.minimum) });
+  if (site.flow.design !== undefined) flows.push({ label: "design", q: toFlow(site.flow.design) });
+  flows.push({ label: "maximum", q: toFlow(site.flow.maximum) });
+  const flowWarnings: Warning[] = [];
+  const points: OperatingPoint[] = flows.map(({ label, q }) => {
+    const V = q / area;
+    const re = reynoldsNumber(V, bore, nu);
+    const est = profileFactorEstimate(re, { relativeRoughness: rr, extrapolate: true, warnings: flowWarnings });
+    let f = NaN;
+    try {
+      f = frictionFactor(re, rr);
+    } catch {
+      f = 64 / re;
+    }
+    return {
+      label,
+      flowRate: q,
+      meanVelocity: V,
+      reynolds: re,
+      regime: est.regime,
+      profileFactor: est.factor,
+      profileFactorSpread: est.spread,
+      pathVelocity: V / est.factor,
+      frictionFactor: f,
+    };
+  });
+  for (const w of flowWarnings) if (!warnings.some((x) => x.message === w.message)) warnings.push(w);
+  const kValues = points.map((p) => p.profileFactor);
+  const profileFactorChange = (Math.max(...kValues) - Math.min(...kValues)) /
+    ((Math.max(...kValues) + Math.min(...kValues)) / 2);
+  tr.push(traceEntry("formulation: profile factor (power law, Nikuradse n; spread over models)", "lib/flow", "", "common-practice", "computed"));
+
+  // --- mountings -----------------------------------------------------------------------
+  const baseInputs = (n: number): ClampOnInputs => ({
+    outsideDiameter: rp.outsideDiameter,
+    wallThickness,
+    wallSoundSpeed: wallL,
+    wallShearSpeed: wallS,
+    lining: lining.map((l) => ({ thickness: l.thickness, soundSpeed: l.soundSpeed })),
+    fluidSoundSpeed: c,
+    wedgeSoundSpeed: cw,
+    wedgeAngle: td.wedgeAngle,
+    traverses: n,
+    wedge: td.elementHeight !== undefined || td.indexOffset !== undefined
+      ? { elementHeight: td.elementHeight, indexOffset: td.indexOffset }
+      : undefined,
+  });
+  const wallTolHalf = sp.measuredWallThickness !== undefined
+    ? PLAN_ASSUMPTIONS.gaugeHalfWidth
+    : halfWidthTol(rp.tolerances?.wallThickness) ?? 0.125 * wallThickness / 2;
+  const odHalf = halfWidthTol(rp.tolerances?.outsideDiameter) ??
+    PLAN_ASSUMPTIONS.defaultOdRelative * rp.outsideDiameter;
+  const budgetWarnings: Warning[] = [];
+  const mountingPlans: (MountingPlan & { path: ClampOnPath; inputs: ClampOnInputs })[] = [];
+  for (const n of site.mountings) {
+    const inputs = baseInputs(n);
+    const path = clampOnPath(inputs);
+    const win = searchWindow(inputs, {
+      fluidSoundSpeed: cSpread,
+      wallThickness: wallTolHalf,
+      wallSoundSpeed: sp.wallSoundSpeed !== undefined ? 0 : mat.longitudinalSpread ?? 0,
+      wallShearSpeed: sp.wallShearSpeed !== undefined ? 0 : mat.shearSpread ?? 0,
+      wedgeSoundSpeed: cwHalf,
+      wedgeAngle: PLAN_ASSUMPTIONS.wedgeAngleHalfWidth,
+      ...(lining.length
+        ? { liningThickness: PLAN_ASSUMPTIONS.liningThicknessRelative * lining[0].thickness }
+        : {}),
+      ...(dcwdT !== 0
+        ? {
+          wedgeTemperature: {
+            uncertainty: PLAN_ASSUMPTIONS.wedgeTemperatureHalfWidth,
+            dSoundSpeedDT: dcwdT,
+          },
+        }
+        : {}),
+    });
+    const times = points.map((p) => {
+      const t = transitTimes(path, p.pathVelocity);
+      return { label: p.label, upstream: t.upstream, downstream: t.downstream, deltaT: t.deltaT };
+    });
+    const dtMin = Math.abs(times[0].deltaT);
+    const vmin = minimumResolvableVelocity(path, timingOffset);
+    const wb = wallBorneSignal(path, { frequency: td.frequency });
+    const budget = signalBudget(path, {
+      frequency: td.frequency,
+      temperature: T,
+      pressure: fl.pressure,
+      liquid: { density: rho },
+      wedge: { density: wedgeDensity, attenuation: wedgeAtt },
+      wall: { density: mat.density, attenuation: mat.attenuation },
+      lining: lining.map((l) => {
+        const lm = reg.material(l.material);
+        return { density: lm.density, attenuation: lm.attenuation };
+      }),
+    }, { extrapolate: true, warnings: budgetWarnings });
+    let overTemperature: MountingPlan["overTemperature"];
+    if (fl.temperatureRange) {
+      const { min, max } = fl.temperatureRange;
+      overTemperature = [];
+      for (let i = 0; i <= 6; i++) {
+        const Ti = min + (max - min) * i / 6;
+        const ci = fl.soundSpeed ?? liquidProperties(fl.liquid, Ti, fl.pressure, {
+          salinity: fl.salinity,
+          formulation: fl.formulation,
+          extrapolate: true,
+          warnings: [],
+        }).soundSpeed;
+        const cwi = cw + dcwdT * (Ti - T);
+        const pi = clampOnPath({ ...inputs, fluidSoundSpeed: ci, wedgeSoundSpeed: cwi });
+        overTemperature.push({
+          temperature: Ti,
+          spacing: pi.spacing,
+          fluidSoundSpeed: ci,
+          totalTime: pi.totalTime,
+        });
+      }
+    }
+    mountingPlans.push({
+      traverses: n,
+      name: mountingName(n),
+      spacing: path.spacing,
+      referenceMarkDistance: path.referenceMarkDistance,
+      fluidAngle: path.fluidAngle,
+      wallAngle: path.wallAngle,
+      wallMode: path.wallMode,
+      modes: path.modes,
+      fluidPathLength: path.fluidPathLength,
+      fluidTime: path.fluidTime,
+      wallTime: path.wallTime,
+      liningTime: path.liningTime,
+      totalTime: path.totalTime,
+      searchWindow: win,
+      times,
+      minimumResolvableVelocity: vmin,
+      offsetFraction: timingOffset / dtMin,
+      resolvableAtMinimum: dtMin >= PLAN_ASSUMPTIONS.resolvableMultiple * timingOffset,
+      wallBorne: { separation: wb.separation, overlaps: wb.overlaps },
+      signal: { totalDb: budget.totalDb, rating: budget.rating },
+      overTemperature,
+      expandedByPoint: [],
+      path,
+      inputs,
+    });
+    if (n === site.mountings[0]) addTrace(budget.trace);
+  }
+  for (const w of budgetWarnings) if (!warnings.some((x) => x.message === w.message)) warnings.push(w);
+
+  // --- straight run --------------------------------------------------------------------
+  let straightRun: SitePlan["straightRun"];
+  let installError = 0;
+  let installHalf = 0;
+  const reList = points.map((p) => p.reynolds);
+  const designPoint = points.find((p) => p.label === "design") ?? points[points.length - 1];
+  // the mounting the run is ranked for: the first usable one by the rule below (V by default)
+  const provisional = chooseMounting(mountingPlans);
+  if (site.run) {
+    const run = site.run;
+    const upFit = resolveFitting(run.upstream.fitting);
+    const downFit = resolveFitting(run.downstream.fitting);
+    const rank = rankPositions({
+      runLength: run.length,
+      diameter: bore,
+      upstream: { fitting: upFit.id, orientation: run.upstream.orientation },
+      downstream: { fitting: downFit.id },
+      traverses: provisional.traverses,
+      reynolds: reList,
+      fluidAngle: provisional.fluidAngle,
+    });
+    const position = run.plannedPosition ?? rank.recommendedPosition;
+    const orientation = run.plannedPosition !== undefined
+      ? run.upstream.orientation ?? 0
+      : rank.recommendedOrientation;
+    const check = checkStraightRun({
+      diameter: bore,
+      upstream: { fitting: upFit.id, distance: position },
+      downstream: { fitting: downFit.id, distance: run.length - position },
+    });
+    addTrace(check.trace);
+    const est = profileErrorEstimate({
+      distanceDiameters: position / bore,
+      fitting: upFit.id,
+      orientation,
+      traverses: provisional.traverses,
+      reynolds: designPoint.reynolds,
+      fluidAngle: provisional.fluidAngle,
+      relativeRoughness: rr,
+    });
+    installError = est.error;
+    installHalf = Math.abs(est.error) + est.spread;
+    const along: { position: number; error: number }[] = [];
+    for (let i = 0; i <= 40; i++) {
+      const x = run.length * i / 40;
+      along.push({
+        position: x,
+        error: profileErrorEstimate({
+          distanceDiameters: x / bore,
+          fitting: upFit.id,
+          orientation,
+          traverses: provisional.traverses,
+          reynolds: designPoint.reynolds,
+          fluidAngle: provisional.fluidAngle,
+          relativeRoughness: rr,
+        }).error,
+      });
+    }
+    tr.push(traceEntry("formulation: distorted-profile model (estimate)", "lib/installation", "", "snellpath-installation-model", "recalled"));
+    straightRun = {
+      verdict: check.verdict,
+      position,
+      positionSource: run.plannedPosition !== undefined ? "planned" : "recommended",
+      upstreamDiameters: check.upstreamDiameters,
+      downstreamDiameters: check.downstreamDiameters,
+      requiredUpstream: check.requiredUpstream,
+      requiredDownstream: check.requiredDownstream,
+      commonPracticePosition: rank.commonPracticePosition,
+      recommendedPosition: rank.recommendedPosition,
+      recommendedOrientation: rank.recommendedOrientation,
+      estimatedProfileError: est.error,
+      estimatedProfileErrorSpread: est.spread,
+      reasons: check.reasons,
+      notes: [...rank.notes, est.note],
+      errorAlongRun: along,
+      runLength: run.length,
+      upstreamFitting: upFit.id,
+      downstreamFitting: downFit.id,
+    };
+  } else {
+    warnings.push({
+      code: "no-run",
+      message: "no straight run described: installation effects are not assessed",
+    });
+  }
+
+  // --- uncertainty ---------------------------------------------------------------------
+  const linThick = lining.reduce((s, l) => s + l.thickness, 0);
+  const budgetFor = (m: (typeof mountingPlans)[number], pi: number) => {
+    const p = points[pi];
+    const dt = m.times[pi].deltaT;
+    const path = m.path;
+    // uncertainty of the liquid time: fixed delay, plus wall and lining times' own uncertainty
+    const uWallTime = path.wallTime *
+      Math.hypot(wallTolHalf / wallThickness, (mat.longitudinalSpread ?? 0) / wallL) / Math.sqrt(3);
+    const uLinTime = path.liningTime *
+      Math.hypot(PLAN_ASSUMPTIONS.liningThicknessRelative, lining.some((l) => !l.overridden) ? PLAN_ASSUMPTIONS.liningSpeedRelative : 0) /
+      Math.sqrt(3);
+    const uTau = Math.hypot(PLAN_ASSUMPTIONS.fixedDelayHalfWidth / Math.sqrt(3), uWallTime, uLinTime);
+    const inputs: UncertainInput[] = [
+      u("outside diameter", rp.outsideDiameter, odHalf / Math.sqrt(3), "rectangular", "m", rp.tolerances?.source ?? "common-practice", rp.tolerances ? rp.tolerances.basis as UncertainInput["basis"] : "common-practice"),
+      u("wall thickness", wallThickness, wallTolHalf / Math.sqrt(3), "rectangular", "m", sp.measuredWallThickness !== undefined ? "common-practice" : rp.tolerances?.source ?? "common-practice", sp.measuredWallThickness !== undefined ? "measured" : "common-practice"),
+      u("lining thickness", linThick, PLAN_ASSUMPTIONS.liningThicknessRelative * linThick / Math.sqrt(3), "rectangular", "m", "common-practice", "common-practice"),
+      u("wedge sound speed", cw, Math.hypot(cwHalf, Math.abs(dcwdT) * PLAN_ASSUMPTIONS.wedgeTemperatureHalfWidth) / Math.sqrt(3), "rectangular", "m/s", td.wedgeMaterial ? reg.material(td.wedgeMaterial).source : "common-practice", td.wedgeMaterial ? "recalled" : "common-practice"),
+      u("wedge angle", td.wedgeAngle, PLAN_ASSUMPTIONS.wedgeAngleHalfWidth / Math.sqrt(3), "rectangular", "rad", "common-practice", "common-practice"),
+      u("transit-time difference (zero offset, resolution)", dt, Math.hypot(zeroOffset / Math.sqrt(3), timingResolution / Math.sqrt(12)), "normal", "s", "common-practice", "input"),
+      u("time in the liquid (fixed delays)", path.fluidTime, uTau, "normal", "s", "common-practice", "common-practice"),
+      u("profile factor (model spread)", p.profileFactor, p.profileFactorSpread / Math.sqrt(3), "rectangular", "", "common-practice", "computed"),
+      u("installation effect (estimate)", 0, installHalf / Math.sqrt(3), "rectangular", "", "snellpath-installation-model", "recalled"),
+    ];
+    return { inputs, result: gumPropagate(flowModel, inputs) };
+  };
+  for (const m of mountingPlans) {
+    (m as { expandedByPoint: number[] }).expandedByPoint = points.map((_p, i) =>
+      budgetFor(m, i).result.relativeExpanded ?? Infinity
+    );
+  }
+  const chosen = chooseMounting(mountingPlans);
+  const byPoint = chosen.expandedByPoint;
+  let worstIdx = 0;
+  byPoint.forEach((x, i) => {
+    if (x > byPoint[worstIdx]) worstIdx = i;
+  });
+  const reportIdx = points.findIndex((p) => p.label === "design") >= 0
+    ? points.findIndex((p) => p.label === "design")
+    : worstIdx;
+  const { inputs: repInputs, result: rep } = budgetFor(chosen, reportIdx);
+  const Q = rep.value;
+  const budget: PlanBudgetLine[] = rep.budget.map((b) => {
+    const inp = repInputs.find((x) => x.name === b.name)!;
+    return {
+      name: b.name,
+      value: b.value,
+      unit: inp.unit ?? "",
+      standardUncertainty: b.standardUncertainty,
+      distribution: b.distribution,
+      sensitivity: b.sensitivity,
+      relativeContribution: b.contribution / Math.abs(Q),
+      share: b.share,
+      source: inp.source ?? "",
+      basis: inp.basis ?? "",
+    };
+  });
+  let mc: SitePlan["uncertainty"]["monteCarlo"];
+  if (options.monteCarlo !== false) {
+    const draws = options.monteCarlo?.draws ?? 100_000;
+    const seed = options.monteCarlo?.seed ?? 1;
+    const r = monteCarlo(flowModel, repInputs, { draws, seed });
+    mc = {
+      draws: r.draws,
+      seed: r.seed,
+      expanded: (r.interval[1] - r.interval[0]) / 2 / Math.abs(Q),
+      interval: r.interval,
+    };
+  }
+  tr.push(traceEntry("formulation: GUM law of propagation", "JCGM 100:2008", "", "jcgm-100-2008", "transcribed"));
+  if (mc) tr.push(traceEntry("formulation: Monte Carlo propagation", "JCGM 101:2008", "", "jcgm-101-2008", "transcribed"));
+
+  // --- verdict -------------------------------------------------------------------------
+  let target: SitePlan["target"];
+  const worst = byPoint[worstIdx];
+  if (site.targetUncertainty !== undefined) {
+    const reachable = worst <= site.targetUncertainty;
+    const suggestions: string[] = [];
+    if (!reachable) {
+      const { result: wr } = budgetFor(chosen, worstIdx);
+      const top = wr.budget.slice(0, 3).map((b) => b.name);
+      for (const name of top) suggestions.push(...suggestionFor(name, straightRun, chosen.traverses));
+      for (const m of mountingPlans) {
+        if (m !== chosen && Math.max(...m.expandedByPoint) <= site.targetUncertainty) {
+          suggestions.push(`the ${m.name} mounting (${m.traverses} traverses) reaches the target`);
+        }
+      }
+      if (suggestions.length === 0) suggestions.push("no single change found: review the budget");
+    }
+    target = {
+      uncertainty: site.targetUncertainty,
+      reachable,
+      worstExpanded: worst,
+      worstPoint: points[worstIdx].label,
+      suggestions: [...new Set(suggestions)],
+    };
+  }
+  const technique = techniqueScreening({
+    solidsFraction: site.content?.solids,
+    gasFraction: site.content?.gas,
+  });
+  if (technique.favours === "doppler") {
+    warnings.push({ code: "technique", message: `transit time is unlikely to work here: ${technique.reasons.join("; ")}` });
+  }
+  const mainLimitation = budget[0]?.name ?? "";
+
+  // --- cautions ------------------------------------------------------------------------
+  const cautions = cautionsFor(T, fl.pressure, fl.liquid, lining.length > 0);
+
+  const { path: _p, inputs: _i, ...chosenRest } = chosen;
+  void chosenRest;
+  return {
+    name: site.name,
+    id: site.id,
+    invented: site.invented ?? false,
+    registryHash: reg.hash,
+    pipe: {
+      outsideDiameter: rp.outsideDiameter,
+      wallThickness,
+      insideDiameter,
+      boreDiameter: bore,
+      material: materialId,
+      wallSoundSpeed: wallL,
+      wallShearSpeed: wallS,
+      lining: lining.map(({ material, thickness, soundSpeed }) => ({ material, thickness, soundSpeed })),
+      description: rp.origin === "catalogue"
+        ? `${rp.standard} NPS ${rp.nps} schedule ${rp.schedule}`
+        : "measured pipe",
+      measuredWallThickness: sp.measuredWallThickness,
+    },
+    fluid: {
+      liquid: fl.liquid,
+      name: liq.name,
+      temperature: T,
+      pressure: fl.pressure,
+      soundSpeed: c,
+      soundSpeedSpread: cSpread,
+      density: rho,
+      kinematicViscosity: nu,
+    },
+    transducer: {
+      wedgeSoundSpeed: cw,
+      wedgeAngle: td.wedgeAngle,
+      frequency: td.frequency,
+      timingResolution,
+      zeroOffset,
+    },
+    operatingPoints: points,
+    profileFactorChange,
+    mountings: mountingPlans.map(({ path: _x, inputs: _y, ...m }) => m),
+    recommendedMounting: chosen.traverses,
+    straightRun,
+    uncertainty: {
+      mounting: chosen.traverses,
+      operatingPoint: points[reportIdx].label,
+      expanded: rep.relativeExpanded ?? Infinity,
+      coverageFactor: rep.coverageFactor,
+      expandedByPoint: points.map((p, i) => ({ label: p.label, expanded: byPoint[i] })),
+      budget,
+      monteCarlo: mc,
+    },
+    target,
+    technique: { favours: technique.favours, reasons: technique.reasons },
+    mainLimitation,
+    trace: dedupeTrace(tr),
+    cautions,
+    warnings,
+  };
+}
+
+function u(
+  name: string,
+  value: number,
+  standardUncertainty: number,
+  distribution: UncertainInput["distribution"],
+  unit: string,
+  source: string,
+  basis: UncertainInput["basis"],
+): UncertainInput {
+  return { name, value, standardUncertainty, distribution, unit, source, basis };
+}
+
+/**
+ * The mounting the budget is for: among mountings whose signal is not weak and whose wall-borne
+ * signal does not overlap, the one with the most traverses that is resolvable at minimum flow,
+ * else the most traverses; if none qualifies, the first given (common practice: more traverses
+ * give a longer path and a larger Δt, as long as the signal holds).
+ */
+function chooseMounting<T extends MountingPlan>(plans: readonly T[]): T {
+  if (plans.length === 0) throw new InputError("mountings", "none", "at least one traverse count");
+  const usable = plans.filter((m) => m.signal.rating !== "weak" && !m.wallBorne.overlaps);
+  if (usable.length === 0) return plans[0];
+  const resolvable = usable.filter((m) => m.resolvableAtMinimum);
+  const pool = resolvable.length ? resolvable : usable;
+  const lowest = Math.min(...pool.map((m) => m.expandedByPoint.length ? Math.max(...m.expandedByPoint) : 0));
+  const good = pool.filter((m) =>
+    !m.expandedByPoint.length || Math.max(...m.expandedByPoint) <= lowest * 1.05
+  );
+  return good.reduce((a, b) => (b.traverses < a.traverses ? b : a));
+}
+
+function suggestionFor(
+  name: string,
+  run: SitePlan["straightRun"],
+  traverses: number,
+): string[] {
+  if (name.startsWith("installation")) {
+    const s = ["a longer straight run upstream, or a location further from the upstream fitting"];
+    if (run && run.position !== run.recommendedPosition) {
+      s.push(`move to the recommended position ${run.recommendedPosition.toFixed(2)} m from the upstream fitting`);
+    }
+    return s;
+  }
+  if (name.startsWith("wall thickness")) return ["measure the wall with a thickness gauge"];
+  if (name.startsWith("outside diameter")) return ["measure the circumference with a tape"];
+  if (name.startsWith("lining")) return ["measure the lining thickness (for example at a cut or a fitting)"];
+  if (name.startsWith("transit-time difference")) {
+    return [`more traverses than ${traverses} (a longer path gives a larger Δt), or finer timing`];
+  }
+  if (name.startsWith("profile factor")) return ["a multi-path arrangement, or a site with Reynolds number out of transition"];
+  if (name.startsWith("wedge")) return ["check the transducers' wedge data and temperature"];
+  if (name.startsWith("time in the liquid")) return ["zero the fixed delays on site"];
+  return [];
+}
+
+function cautionsFor(T: number, p: number, liquid: string, lined: boolean): string[] {
+  const out = [
+    "Plans are estimates: installation-effect figures come from a model, not a calibration.",
+    "Follow the site's permit-to-work system, local codes and licensed practice; they take precedence over this plan.",
+  ];
+  if (T > 333.15) out.push(`Hot line (${(T - 273.15).toFixed(0)} °C): burn hazard; let lagging and surfaces be checked before contact.`);
+  if (T < 273.15 + 5) out.push("Cold line: condensation and ice; frost-burn hazard on bare metal.");
+  if (p > 1e6) out.push(`Pressurised line (${(p / 1e5).toFixed(1)} bar absolute): never loosen fittings or tapping points.`);
+  out.push("Lifting insulation or lagging may expose hot surfaces or hazardous fibres: have it surveyed first.");
+  out.push("Pits, chambers and vaults are confined spaces: gas test, permit and standby person first.");
+  if (!["water", "seawater"].includes(liquid)) {
+    out.push(`Process liquid (${liquid}): check the hazardous-area classification and use certified equipment.`);
+  }
+  if (lined) out.push("Lined pipe: do not cut or drill to check the lining; use records or a fitting.");
+  return out;
+}
+
+function dedupeTrace(tr: readonly TraceEntry[]): TraceEntry[] {
+  const seen = new Set<string>();
+  const out: TraceEntry[] = [];
+  for (const t of tr) {
+    const k = `${t.quantity}|${t.value}|${t.source}`;
+    if (seen.has(k)) continue;
+    seen.add(k);
+    out.push(t);
+  }
+  return out;
+}
+
+function fmtMm(x: number): string {
+  return `${Number((x * 1000).toPrecision(4))} mm`;
+}
+
+/** Re-exported for reports: the model's input names, in order. */
+export const PLAN_MODEL_INPUTS: readonly string[] = MODEL_INPUTS;
+void NoPhysicalAnswerError;
