@@ -43,7 +43,7 @@ export const PLAN_ASSUMPTIONS = {
   /** Half-width of the wedge-angle uncertainty (machining and mounting), rad. */
   wedgeAngleHalfWidth: 0.2 * Math.PI / 180,
   /** Half-width of the wedge temperature's departure from the liquid's, K. */
-  wedgeTemperatureHalfWidth: 5,
+  wedgeTemperatureHalfWidth: 2,
   /** Relative half-width of a wedge sound speed stated without a material, dimensionless. */
   statedWedgeSpeedRelative: 0.003,
   /** Relative half-width of a lining's thickness (linings are uneven), dimensionless. */
@@ -52,6 +52,10 @@ export const PLAN_ASSUMPTIONS = {
   liningSpeedRelative: 0.05,
   /** Half-width of a thickness-gauge reading, m. */
   gaugeHalfWidth: 0.1e-3,
+  /** Half-width of a circumference taped round the pipe, m. */
+  tapeHalfWidth: 1e-3,
+  /** Half-width of an outside diameter measured with a caliper, m. */
+  caliperHalfWidth: 0.5e-3,
   /** Half-width of the fixed delay (electronics, cables, couplant) after zero setting, s. */
   fixedDelayHalfWidth: 50e-9,
   /** Timing resolution assumed when the site states none, s. */
@@ -69,6 +73,8 @@ const ASSUMPTION_TEXT: Record<keyof typeof PLAN_ASSUMPTIONS, [string, string]> =
   liningThicknessRelative: ["lining thickness, relative half-width", ""],
   liningSpeedRelative: ["lining sound speed from its material, relative half-width", ""],
   gaugeHalfWidth: ["thickness-gauge reading, half-width", "m"],
+  tapeHalfWidth: ["circumference taped round the pipe, half-width", "m"],
+  caliperHalfWidth: ["outside diameter by caliper, half-width", "m"],
   fixedDelayHalfWidth: ["fixed delay after zero setting, half-width", "s"],
   defaultTimingResolution: ["timing resolution when none is stated", "s"],
   resolvableMultiple: ["Δt at minimum flow over timing offset, least ratio to count resolvable", ""],
@@ -335,6 +341,11 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
       wallThickness: sp.wallThickness!,
       material: sp.material,
       lining: liningIn,
+      uncertainty: {
+        outsideDiameter: sp.outsideDiameter !== undefined ? PLAN_ASSUMPTIONS.caliperHalfWidth : undefined,
+        circumference: sp.circumference !== undefined ? PLAN_ASSUMPTIONS.tapeHalfWidth : undefined,
+        wallThickness: PLAN_ASSUMPTIONS.gaugeHalfWidth,
+      },
     };
   } else {
     spec = {
@@ -567,7 +578,7 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
         return { density: lm.density, attenuation: lm.attenuation };
       }),
     }, { extrapolate: true, warnings: budgetWarnings });
-    let overTemperature: MountingPlan["overTemperature"];
+    let overTemperature: NonNullable<MountingPlan["overTemperature"]>[number][] | undefined;
     if (fl.temperatureRange) {
       const { min, max } = fl.temperatureRange;
       overTemperature = [];
@@ -732,7 +743,7 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
     return { inputs, result: gumPropagate(flowModel, inputs) };
   };
   for (const m of mountingPlans) {
-    (m as { expandedByPoint: number[] }).expandedByPoint = points.map((_p, i) =>
+    (m as unknown as { expandedByPoint: number[] }).expandedByPoint = points.map((_p, i) =>
       budgetFor(m, i).result.relativeExpanded ?? Infinity
     );
   }

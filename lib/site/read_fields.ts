@@ -436,13 +436,20 @@ export function nps(ctx: Ctx, raw: unknown, field: string): string {
  * @returns the canonical designation
  */
 export function schedule(ctx: Ctx, raw: unknown, field: string): string {
-  const accepted = 'a schedule such as 40, "80", "STD", "XS", "10S"';
+  const accepted =
+    'a schedule or class such as 40, "80", "STD", "XS", "10S", "DR 17", "PC 350", "K"';
   let s: string | undefined;
   if (typeof raw === "number" && Number.isInteger(raw) && raw > 0) s = String(raw);
   else if (typeof raw === "string") {
-    s = raw.trim().toUpperCase().replace(/^SCH(?:EDULE)?\.?\s*/, "");
+    s = raw.trim().toUpperCase().replace(/^SCH(?:EDULE)?\.?\s*/, "").replace(/\s+/g, " ");
+    // pressure classes (AWWA C151), dimension ratios (HDPE), copper tube types (ASTM B88)
+    s = s.replace(/^(PC|DR)\s*(\d)/, "$1 $2");
   }
-  if (s === undefined || !/^(?:\d{1,3}S?|STD|XS|XXS)$/.test(s) || /^0+S?$/.test(s)) {
+  if (
+    s === undefined ||
+    !/^(?:\d{1,3}S?|STD|XS|XXS|PC \d{2,3}|DR \d{1,2}(?:\.\d)?|[KLM])$/.test(s) ||
+    /^0+S?$/.test(s)
+  ) {
     fail(ctx, field, describe(raw), accepted);
   }
   return s;
