@@ -22,3 +22,4 @@ export * from "./lib/installation/mod.ts";
 export * from "./lib/acoustics/mod.ts";
 export * from "./lib/uncertainty/mod.ts";
 export * from "./lib/report/mod.ts";
+export * from "./lib/site/mod.ts";

@@ -263,22 +263,27 @@ function fastParse(text: string, dimension: Dimension): FastResult {
   if (!Number.isFinite(x)) return { ok: false, wrongDimension: false };
   if (dimension === "temperature") {
     const t = TEMPERATURES[unit];
-    if (t) return { ok: true, value: t(x) };
+    if (t) return finite(t(x));
     return { ok: false, wrongDimension: parseUnitExpr(unit) !== undefined };
   }
   if (dimension === "temperatureDifference") {
     const t = TEMPERATURE_DIFFERENCES[unit];
-    if (t !== undefined) return { ok: true, value: x * t };
+    if (t !== undefined) return finite(x * t);
     return { ok: false, wrongDimension: parseUnitExpr(unit) !== undefined };
   }
-  if (dimension === "pressure" && PRESSURES[unit]) return { ok: true, value: PRESSURES[unit](x) };
+  if (dimension === "pressure" && PRESSURES[unit]) return finite(PRESSURES[unit](x));
   if (unit === "" && dimension !== "ratio") return { ok: false, wrongDimension: true };
   const u = parseUnitExpr(unit);
   if (!u) {
     return { ok: false, wrongDimension: TEMPERATURES[unit] !== undefined || unit in PRESSURES };
   }
   if (!sameDim(u.d, DIMS[dimension])) return { ok: false, wrongDimension: true };
-  return { ok: true, value: x * u.f };
+  return finite(x * u.f);
+}
+
+/** A value that overflowed in the conversion (for example "1e308 km") is not read. */
+function finite(value: number): FastResult {
+  return Number.isFinite(value) ? { ok: true, value } : { ok: false, wrongDimension: false };
 }
 
 /**

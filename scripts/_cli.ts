@@ -18,7 +18,8 @@ export const COMMON_OPTIONS: OptionSpec = {
 };
 
 /**
- * Parse arguments strictly; print help and exit 0 on `--help`.
+ * Parse arguments strictly; print help and exit 0 on `--help`. A single leading `--` is dropped:
+ * `deno task NAME -- ARGS` hands the separator on to the script.
  *
  * @param args the arguments (Deno.args)
  * @param options the script's options (the common ones are added)
@@ -33,7 +34,7 @@ export function parseCli(
   let parsed;
   try {
     parsed = parseArgs({
-      args,
+      args: args[0] === "--" ? args.slice(1) : args,
       options: { ...COMMON_OPTIONS, ...options },
       allowPositionals: true,
       strict: true,

@@ -6,7 +6,12 @@
 import { defaultRegistry } from "../registry/mod.ts";
 import type { Fitting } from "../registry/schemas/fittings.ts";
 
-export type { Fitting };
+export type {
+  Fitting,
+  FittingComponent,
+  FittingLength,
+  FittingProvenance,
+} from "../registry/schemas/fittings.ts";
 
 /**
  * A fitting by id or alias from data/fittings.yaml, or the entry itself when given one.

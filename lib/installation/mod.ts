@@ -11,7 +11,13 @@
  *
  * @module
  */
-export { type Fitting, resolveFitting } from "./fittings.ts";
+export {
+  type Fitting,
+  type FittingComponent,
+  type FittingLength,
+  type FittingProvenance,
+  resolveFitting,
+} from "./fittings.ts";
 export {
   checkStraightRun,
   MARGINAL_FRACTION,

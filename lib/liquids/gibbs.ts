@@ -36,9 +36,11 @@ export interface GibbsDerivatives {
 }
 
 interface GibbsTables {
-  wj: Int8Array;
-  wk: Int8Array;
-  wg: Float64Array;
+  /** Highest power of τ and of π over both parts. */
+  J: number;
+  K: number;
+  /** Pure-water coefficients on a dense (J+1)×(K+1) grid, row j, column k. */
+  water: Float64Array;
   si: Int8Array;
   sj: Int8Array;
   sk: Int8Array;
@@ -54,35 +56,78 @@ function load(): GibbsTables {
   const w = reg.coefficients("seawater-iapws09-water").coefficients.g as number[][];
   const sd = reg.coefficients("seawater-iapws08-saline");
   const s = sd.coefficients.g as number[][];
+  const J = Math.max(...w.map((r) => r[0]), ...s.map((r) => r[1]));
+  const K = Math.max(...w.map((r) => r[1]), ...s.map((r) => r[2]));
+  const water = new Float64Array((J + 1) * (K + 1));
+  for (const r of w) water[r[0] * (K + 1) + r[1]] += r[2];
   tables = {
-    wj: Int8Array.from(w.map((r) => r[0])),
-    wk: Int8Array.from(w.map((r) => r[1])),
-    wg: Float64Array.from(w.map((r) => r[2])),
+    J,
+    K,
+    water,
     si: Int8Array.from(s.map((r) => r[0])),
     sj: Int8Array.from(s.map((r) => r[1])),
     sk: Int8Array.from(s.map((r) => r[2])),
     sg: Float64Array.from(s.map((r) => r[3])),
     Su: sd.constants.Su as number,
   };
+  coef = new Float64Array(water.length);
   return tables;
 }
 
 const TU = 40;
 const PU = 1e8;
-const powT = new Float64Array(9);
-const powP = new Float64Array(8);
 const powX = new Float64Array(9);
-/** Accumulators: g, g_tau, g_pi, g_tautau, g_taupi, g_pipi (reduced variables). */
-const acc = new Float64Array(6);
+/** Water plus saline coefficients at the salinity `coefSA`, on the dense (j, k) grid. */
+let coef = new Float64Array(0);
+let coefSA = Number.NaN;
 
-function addTerm(c: number, j: number, k: number): void {
-  const tj = powT[j], pk = powP[k];
-  acc[0] += c * tj * pk;
-  if (j >= 1) acc[1] += c * j * powT[j - 1] * pk;
-  if (k >= 1) acc[2] += c * k * tj * powP[k - 1];
-  if (j >= 2) acc[3] += c * j * (j - 1) * powT[j - 2] * pk;
-  if (j >= 1 && k >= 1) acc[4] += c * j * k * powT[j - 1] * powP[k - 1];
-  if (k >= 2) acc[5] += c * k * (k - 1) * tj * powP[k - 2];
+/**
+ * Collapse the salinity sum at S_A into the dense grid: g = Σ_jk C_jk τ^j π^k with
+ * C_jk = g^W_jk + Σ_i g^S_ijk x^i (x² ln x for i = 1), x = sqrt(S_A/S_u). Kept until S_A changes.
+ */
+function collapse(t: GibbsTables, SA: number): Float64Array {
+  if (SA === coefSA) return coef;
+  coef.set(t.water);
+  if (SA > 0) {
+    const x = Math.sqrt(SA / t.Su);
+    powX[0] = 1;
+    for (let i = 1; i < powX.length; i++) powX[i] = powX[i - 1] * x;
+    const x2lnx = powX[2] * Math.log(x);
+    const W = t.K + 1;
+    for (let n = 0; n < t.sg.length; n++) {
+      const i = t.si[n];
+      coef[t.sj[n] * W + t.sk[n]] += t.sg[n] * (i === 1 ? x2lnx : powX[i]);
+    }
+  }
+  coefSA = SA;
+  return coef;
+}
+
+/** Reduced g and its derivatives by nested Horner sums over the collapsed grid, into `out`. */
+function evaluate(t: GibbsTables, c: Float64Array, tau: number, pi: number): void {
+  const W = t.K + 1;
+  // Outer Horner in τ over the rows' values q_j(π), q'_j(π), q''_j(π).
+  let a0 = 0, a1 = 0, a2 = 0, b0 = 0, b1 = 0, c0 = 0;
+  for (let j = t.J; j >= 0; j--) {
+    let q = 0, q1 = 0, q2 = 0;
+    for (let k = j * W + t.K; k >= j * W; k--) {
+      q2 = q2 * pi + q1;
+      q1 = q1 * pi + q;
+      q = q * pi + c[k];
+    }
+    a2 = a2 * tau + a1;
+    a1 = a1 * tau + a0;
+    a0 = a0 * tau + q;
+    b1 = b1 * tau + b0;
+    b0 = b0 * tau + q1;
+    c0 = c0 * tau + 2 * q2;
+  }
+  out.g = a0;
+  out.gT = a1 / TU;
+  out.gP = b0 / PU;
+  out.gTT = 2 * a2 / (TU * TU);
+  out.gTP = b1 / (TU * PU);
+  out.gPP = c0 / (PU * PU);
 }
 
 /**
@@ -111,35 +156,49 @@ function addTerm(c: number, j: number, k: number): void {
  */
 export function gibbsSeawater(SA: number, T: number, p: number): GibbsDerivatives {
   const t = load();
-  const tau = (T - T0) / TU;
-  const pi = (p - P0) / PU;
-  powT[0] = 1;
-  powP[0] = 1;
-  for (let i = 1; i < powT.length; i++) powT[i] = powT[i - 1] * tau;
-  for (let i = 1; i < powP.length; i++) powP[i] = powP[i - 1] * pi;
-  acc.fill(0);
-  for (let n = 0; n < t.wg.length; n++) addTerm(t.wg[n], t.wj[n], t.wk[n]);
-  if (SA > 0) {
-    const x = Math.sqrt(SA / t.Su);
-    powX[0] = 1;
-    for (let i = 1; i < powX.length; i++) powX[i] = powX[i - 1] * x;
-    const lnx = Math.log(x);
-    for (let n = 0; n < t.sg.length; n++) {
-      const i = t.si[n];
-      const c = t.sg[n] * (i === 1 ? powX[2] * lnx : powX[i]);
-      addTerm(c, t.sj[n], t.sk[n]);
-    }
-  }
-  out.g = acc[0];
-  out.gT = acc[1] / TU;
-  out.gP = acc[2] / PU;
-  out.gTT = acc[3] / (TU * TU);
-  out.gTP = acc[4] / (TU * PU);
-  out.gPP = acc[5] / (PU * PU);
+  evaluate(t, collapse(t, SA), (T - T0) / TU, (p - P0) / PU);
   return out;
 }
 
 const out: GibbsDerivatives = { g: 0, gT: 0, gP: 0, gTT: 0, gTP: 0, gPP: 0 };
+
+/** Reduced g, g_τ, g_ττ on the 101 325 Pa isobar (π = 0: the k = 0 column), into `iso`. */
+const iso = new Float64Array(3);
+function evaluateP0(t: GibbsTables, c: Float64Array, tau: number): Float64Array {
+  const W = t.K + 1;
+  let a0 = 0, a1 = 0, a2 = 0;
+  for (let j = t.J; j >= 0; j--) {
+    a2 = a2 * tau + a1;
+    a1 = a1 * tau + a0;
+    a0 = a0 * tau + c[j * W];
+  }
+  iso[0] = a0;
+  iso[1] = a1;
+  iso[2] = 2 * a2;
+  return iso;
+}
+
+/**
+ * θ for potentialTemperature and conservativeTemperature, checks done. Newton's method on
+ * g_T(S_A, θ, p0) = g_T(S_A, T, p) over the 101 325 Pa isobar of the collapsed polynomial,
+ * started from the linear lapse-rate estimate θ₀ = T + (g_Tp/g_TT)(p − p0) at (T, p).
+ */
+function theta(SA: number, T: number, p: number): number {
+  const t = load();
+  const c = collapse(t, SA);
+  evaluate(t, c, (T - T0) / TU, (p - P0) / PU);
+  const eta = out.gT * TU; // reduced: ∂g/∂τ
+  let th = T + (out.gTP / out.gTT) * (p - P0);
+  for (let n = 0; n < 30; n++) {
+    const r = evaluateP0(t, c, (th - T0) / TU);
+    const step = TU * (r[1] - eta) / r[2];
+    th -= step;
+    if (Math.abs(step) < 1e-12) return th;
+  }
+  throw new NoPhysicalAnswerError(
+    `potential temperature did not converge at S_A ${SA} kg/kg, T ${T} K, p ${p} Pa`,
+  );
+}
 
 const SA_RANGE: [number, number] = [0, 0.042];
 const T_RANGE: [number, number] = [T0 - 6, T0 + 40];
@@ -180,17 +239,7 @@ export function potentialTemperature(
   options?: ValidityOptions,
 ): number {
   checkState(SA, T, p, options);
-  const eta = gibbsSeawater(SA, T, p).gT;
-  let th = T;
-  for (let n = 0; n < 30; n++) {
-    const d = gibbsSeawater(SA, th, P0);
-    const step = (d.gT - eta) / d.gTT;
-    th -= step;
-    if (Math.abs(step) < 1e-12) return th;
-  }
-  throw new NoPhysicalAnswerError(
-    `potential temperature did not converge at S_A ${SA} kg/kg, T ${T} K, p ${p} Pa`,
-  );
+  return theta(SA, T, p);
 }
 
 /**
@@ -220,9 +269,11 @@ export function conservativeTemperature(
   p: number,
   options?: ValidityOptions,
 ): number {
-  const th = potentialTemperature(SA, T, p, options);
-  const d = gibbsSeawater(SA, th, P0);
-  return (d.g - th * d.gT) / CP0;
+  checkState(SA, T, p, options);
+  const th = theta(SA, T, p);
+  const t = load();
+  const r = evaluateP0(t, collapse(t, SA), (th - T0) / TU);
+  return (r[0] - th * r[1] / TU) / CP0;
 }
 
 /**

@@ -14,7 +14,7 @@ import {
 } from "../errors.ts";
 import { defaultRegistry } from "../registry/mod.ts";
 import { nearest } from "../registry/nearest.ts";
-import type { Liquid } from "../registry/schemas/liquids.ts";
+import type { LiquidEntry } from "../registry/schemas/liquids.ts";
 import { trace, type TraceEntry } from "../trace.ts";
 import { parseQuantity } from "../units.ts";
 import {
@@ -88,7 +88,7 @@ const WATER_FORMS: readonly WaterFormulation[] = ["iapws95", "if97", "del-grosso
 const SEA_FORMS: readonly SeawaterFormulation[] = ["teos10", "teos10-gibbs", "unesco1983"];
 
 interface Prepared {
-  entry: Liquid;
+  entry: LiquidEntry;
   tRange: [number, number];
   pRange: [number, number];
   soundAt: number;
@@ -96,7 +96,7 @@ interface Prepared {
 }
 const prepared = new Map<string, Prepared>();
 
-function prepare(entry: Liquid): Prepared {
+function prepare(entry: LiquidEntry): Prepared {
   let p = prepared.get(entry.id);
   if (p) return p;
   const tq = (s: string) => parseQuantity(s, "temperature", `${entry.id} temperature`);
@@ -131,7 +131,7 @@ function interpLogInv(points: readonly (readonly [number, number])[], T: number)
   return Math.exp(Math.log(y0) + (Math.log(y1) - Math.log(y0)) * (u - u0) / (u1 - u0));
 }
 
-function prov(entry: Liquid, part: { source?: string; basis?: string }) {
+function prov(entry: LiquidEntry, part: { source?: string; basis?: string }) {
   return {
     source: part.source ?? entry.source ?? "common-practice",
     basis: (part.basis ?? entry.basis ?? "recalled") as TraceEntry["basis"],
@@ -161,7 +161,7 @@ export function liquidVapourPressure(id: string, T: number): number | undefined 
 }
 
 function registryLiquid(
-  entry: Liquid,
+  entry: LiquidEntry,
   T: number,
   p: number,
   opts: ValidityOptions,
@@ -392,7 +392,7 @@ export function liquidProperties(
     };
   } else {
     const reg = defaultRegistry();
-    let entry: Liquid;
+    let entry: LiquidEntry;
     try {
       entry = reg.liquid(id);
     } catch (e) {

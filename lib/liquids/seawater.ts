@@ -27,6 +27,9 @@ interface V75 {
   j: Int8Array;
   k: Int8Array;
   v: Float64Array;
+  /** Highest power of τ and of ζ. */
+  J: number;
+  K: number;
   Su: number;
   dS: number;
 }
@@ -37,40 +40,49 @@ function load(): V75 {
   const d = defaultRegistry().coefficients("seawater-teos10-75term");
   const rows = d.coefficients.v as number[][];
   const sso = d.constants.SSO as number;
+  const J = Math.max(...rows.map((r) => r[1]));
+  const K = Math.max(...rows.map((r) => r[2]));
   v75 = {
     i: Int8Array.from(rows.map((r) => r[0])),
     j: Int8Array.from(rows.map((r) => r[1])),
     k: Int8Array.from(rows.map((r) => r[2])),
     v: Float64Array.from(rows.map((r) => r[3])),
+    J,
+    K,
     Su: 40 * sso / 35,
     dS: d.constants.deltaS as number,
   };
+  grid = new Float64Array((J + 1) * (K + 1));
   return v75;
 }
 
 const ps = new Float64Array(8);
-const pt = new Float64Array(8);
-const pz = new Float64Array(8);
 const res = new Float64Array(2);
+/** The polynomial with the salinity sum done at `gridSA`: v = Σ_kj D_kj τ^j ζ^k, row k. */
+let grid = new Float64Array(0);
+let gridSA = Number.NaN;
 
 /** v and ∂v/∂ζ of the 75-term polynomial, into `res`. SA g/kg, CT °C, sea pressure dbar. */
 function v75eval(SAgkg: number, CT: number, pdbar: number): Float64Array {
   const c = load();
-  const s = Math.sqrt((SAgkg + c.dS) / c.Su);
+  const W = c.J + 1;
+  if (SAgkg !== gridSA) {
+    const s = Math.sqrt((SAgkg + c.dS) / c.Su);
+    ps[0] = 1;
+    for (let n = 1; n < ps.length; n++) ps[n] = ps[n - 1] * s;
+    grid.fill(0);
+    for (let n = 0; n < c.v.length; n++) grid[c.k[n] * W + c.j[n]] += c.v[n] * ps[c.i[n]];
+    gridSA = SAgkg;
+  }
   const tau = CT / 40;
   const z = pdbar * 1e-4;
-  ps[0] = pt[0] = pz[0] = 1;
-  for (let n = 1; n < 8; n++) {
-    ps[n] = ps[n - 1] * s;
-    pt[n] = pt[n - 1] * tau;
-    pz[n] = pz[n - 1] * z;
-  }
+  // Horner in ζ (value and first derivative) over rows that are Horner sums in τ.
   let v = 0, dv = 0;
-  for (let n = 0; n < c.v.length; n++) {
-    const k = c.k[n];
-    const a = c.v[n] * ps[c.i[n]] * pt[c.j[n]];
-    v += a * pz[k];
-    if (k > 0) dv += a * k * pz[k - 1];
+  for (let k = c.K; k >= 0; k--) {
+    let r = 0;
+    for (let n = k * W + c.J; n >= k * W; n--) r = r * tau + grid[n];
+    dv = dv * z + v;
+    v = v * z + r;
   }
   res[0] = v;
   res[1] = dv;
@@ -82,6 +94,7 @@ const SA75: [number, number] = [0, 42];
 const CT75: [number, number] = [-3, 42.5]; // Θ of in-situ −2..40 °C over the S, p range
 const T75: [number, number] = [-2, 40];
 const P75: [number, number] = [0, 8000];
+const T75K: [number, number] = [T0 + T75[0], T0 + T75[1]];
 
 function check75(SAgkg: number, CT: number, pdbar: number, options?: ValidityOptions): void {
   checkRange("absolute salinity", SAgkg, SA75, "g/kg", NAME75, options);
@@ -206,7 +219,7 @@ function soundSpeed(
   switch (formulation) {
     case "teos10": {
       const SA = absoluteSalinity(S, options);
-      checkRange("temperature", T, [T0 + T75[0], T0 + T75[1]], "K", NAME75, options);
+      checkRange("temperature", T, T75K, "K", NAME75, options);
       const CT = conservativeTemperature(SA, T, p, options);
       return soundSpeed75(SA, CT, p - P0, options);
     }
@@ -256,7 +269,7 @@ function density(
   if (formulation !== "teos10") {
     throw new InputError("formulation", JSON.stringify(formulation), "teos10 or teos10-gibbs");
   }
-  checkRange("temperature", T, [T0 + T75[0], T0 + T75[1]], "K", NAME75, options);
+  checkRange("temperature", T, T75K, "K", NAME75, options);
   const CT = conservativeTemperature(SA, T, p, options);
   return 1 / specificVolume75(SA, CT, p - P0, options);
 }

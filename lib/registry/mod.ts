@@ -12,10 +12,10 @@
  */
 import { type LoadedRegistry, loadRegistry } from "./load.ts";
 import { type CoreQueries, coreQueries } from "./core.ts";
-import { pipeQueries } from "./q_pipes.ts";
-import { materialQueries } from "./q_materials.ts";
-import { liquidQueries } from "./q_liquids.ts";
-import { fittingQueries } from "./q_fittings.ts";
+import { type PipeQueries, pipeQueries } from "./q_pipes.ts";
+import { type MaterialQueries, materialQueries } from "./q_materials.ts";
+import { type LiquidQueries, liquidQueries } from "./q_liquids.ts";
+import { type FittingQueries, fittingQueries } from "./q_fittings.ts";
 
 export {
   buildSnapshot,
@@ -28,6 +28,18 @@ export type { DataDoc, LoadedRegistry, LoadOptions } from "./load.ts";
 export { nearest } from "./nearest.ts";
 export type { SourceEntry } from "./schemas/sources.ts";
 export type { CoreQueries } from "./core.ts";
+export type { PipeQueries } from "./q_pipes.ts";
+export type { FittingQueries } from "./q_fittings.ts";
+export type { LiquidQueries } from "./q_liquids.ts";
+export type {
+  LiquidDensityModel,
+  LiquidEntry,
+  LiquidPoint,
+  LiquidProvenance,
+  LiquidRange,
+  LiquidSoundSpeedModel,
+  LiquidViscosityModel,
+} from "./schemas/liquids.ts";
 export type {
   MaterialAttenuation,
   MaterialBasis,
@@ -63,10 +75,10 @@ export function createRegistry(loaded: LoadedRegistry): Registry {
 /** The registry's query object: core, pipe, material, liquid and fitting queries. */
 export type Registry =
   & CoreQueries
-  & ReturnType<typeof pipeQueries>
-  & ReturnType<typeof materialQueries>
-  & ReturnType<typeof liquidQueries>
-  & ReturnType<typeof fittingQueries>;
+  & PipeQueries
+  & MaterialQueries
+  & LiquidQueries
+  & FittingQueries;
 
 /** The bundled data folder. */
 export const DATA_DIR: URL = new URL("../../data/", import.meta.url);

@@ -8,6 +8,19 @@ import type { LoadedRegistry } from "./load.ts";
 import { nearest } from "./nearest.ts";
 import type { Fitting } from "./schemas/fittings.ts";
 
+/** The fitting queries merged into `registry`. */
+export interface FittingQueries {
+  /**
+   * A fitting by id (`elbow-90`) or alias (`straight`), case-insensitive; NotFoundError listing
+   * the nearest ids otherwise.
+   */
+  fitting(id: string): Fitting;
+  /** Every fitting of data/fittings.yaml, in file order. */
+  fittings(): readonly Fitting[];
+  /** Every fitting id (without aliases), in file order. */
+  fittingIds(): string[];
+}
+
 /**
  * Queries over the fittings data (kind `fittings`), bound to one loaded registry.
  *
@@ -23,7 +36,7 @@ import type { Fitting } from "./schemas/fittings.ts";
  * if (q.fitting("straight").id !== "none") throw new Error("alias");
  * ```
  */
-export function fittingQueries(loaded: LoadedRegistry) {
+export function fittingQueries(loaded: LoadedRegistry): FittingQueries {
   const list: Fitting[] = [];
   for (const d of loaded.docs) if (d.kind === "fittings") list.push(...d.data.fittings);
   const byName = new Map<string, Fitting>();

@@ -6,7 +6,15 @@
 import { NotFoundError } from "../errors.ts";
 import type { LoadedRegistry } from "./load.ts";
 import { nearest } from "./nearest.ts";
-import type { Liquid } from "./schemas/liquids.ts";
+import type { LiquidEntry } from "./schemas/liquids.ts";
+
+/** The liquid queries merged into `registry`. */
+export interface LiquidQueries {
+  /** A liquid of data/liquids.yaml by id; NotFoundError listing the nearest ids otherwise. */
+  liquid(id: string): LiquidEntry;
+  /** Every liquid of data/liquids.yaml, in file order. */
+  liquids(): readonly LiquidEntry[];
+}
 
 /**
  * Queries over the liquids data (data/liquids.yaml), bound to one loaded registry. Water and
@@ -24,21 +32,21 @@ import type { Liquid } from "./schemas/liquids.ts";
  * if (q.liquids().length < 10) throw new Error();
  * ```
  */
-export function liquidQueries(loaded: LoadedRegistry) {
-  const all: Liquid[] = [];
+export function liquidQueries(loaded: LoadedRegistry): LiquidQueries {
+  const all: LiquidEntry[] = [];
   for (const d of loaded.docs) {
-    if (d.kind === "liquids") all.push(...(d.data.liquids as Liquid[]));
+    if (d.kind === "liquids") all.push(...(d.data.liquids as LiquidEntry[]));
   }
   const byId = new Map(all.map((l) => [l.id, l]));
   return {
     /** A liquid of data/liquids.yaml by id. */
-    liquid(id: string): Liquid {
+    liquid(id: string): LiquidEntry {
       const l = byId.get(id);
       if (!l) throw new NotFoundError("liquid", id, nearest(id, [...byId.keys()]));
       return l;
     },
     /** Every liquid of data/liquids.yaml. */
-    liquids(): readonly Liquid[] {
+    liquids(): readonly LiquidEntry[] {
       return all;
     },
   };

@@ -37,3 +37,4 @@ export {
   svgPipeSection,
   svgRun,
 } from "./drawings.ts";
+export * from "./plan_report.ts";

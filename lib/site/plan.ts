@@ -279,7 +279,7 @@ export interface SitePlan {
 const MOUNTING_NAMES: Record<number, string> = { 1: "Z", 2: "V", 4: "W" };
 
 /** Name of a mounting by traverse count: Z, V, W, else `N-traverse`. */
-export function mountingName(traverses: number): string {
+function mountingName(traverses: number): string {
   return MOUNTING_NAMES[traverses] ?? `${traverses}-traverse`;
 }
 
@@ -731,7 +731,7 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
     const uTau = Math.hypot(PLAN_ASSUMPTIONS.fixedDelayHalfWidth / Math.sqrt(3), uWallTime, uLinTime);
     const inputs: UncertainInput[] = [
       u("outside diameter", rp.outsideDiameter, odHalf / Math.sqrt(3), "rectangular", "m", rp.tolerances?.source ?? "common-practice", rp.tolerances ? rp.tolerances.basis as UncertainInput["basis"] : "common-practice"),
-      u("wall thickness", wallThickness, wallTolHalf / Math.sqrt(3), "rectangular", "m", sp.measuredWallThickness !== undefined ? "common-practice" : rp.tolerances?.source ?? "common-practice", sp.measuredWallThickness !== undefined ? "measured" : "common-practice"),
+      u("wall thickness", wallThickness, wallTolHalf / Math.sqrt(3), "rectangular", "m", sp.measuredWallThickness !== undefined ? "common-practice" : rp.tolerances?.source ?? "common-practice", sp.measuredWallThickness !== undefined ? "measured" : rp.tolerances ? rp.tolerances.basis as UncertainInput["basis"] : "common-practice"),
       u("lining thickness", linThick, PLAN_ASSUMPTIONS.liningThicknessRelative * linThick / Math.sqrt(3), "rectangular", "m", "common-practice", "common-practice"),
       u("wedge sound speed", cw, Math.hypot(cwHalf, Math.abs(dcwdT) * PLAN_ASSUMPTIONS.wedgeTemperatureHalfWidth) / Math.sqrt(3), "rectangular", "m/s", td.wedgeMaterial ? reg.material(td.wedgeMaterial).source : "common-practice", td.wedgeMaterial ? "recalled" : "common-practice"),
       u("wedge angle", td.wedgeAngle, PLAN_ASSUMPTIONS.wedgeAngleHalfWidth / Math.sqrt(3), "rectangular", "rad", "common-practice", "common-practice"),

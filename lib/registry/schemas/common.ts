@@ -7,10 +7,20 @@ import { z } from "zod";
 import { parseQuantity } from "../../units.ts";
 import type { Dimension } from "../../units.ts";
 
-/** How a datum got into the registry. */
-export const Basis = z.enum(["transcribed", "computed", "common-practice", "recalled"]);
-/** How a datum got into the registry. */
-export type Basis = z.infer<typeof Basis>;
+/**
+ * How a datum got into the registry: `transcribed` from the cited document (or a named copy),
+ * `computed` from other entries by a stated formula, `common-practice` (a rule of the trade) or
+ * `recalled` (from memory of the cited source, with a wider spread).
+ */
+export type Basis = "transcribed" | "computed" | "common-practice" | "recalled";
+
+/** Schema of a {@link Basis}. */
+export const BasisSchema: z.ZodType<Basis> = z.enum([
+  "transcribed",
+  "computed",
+  "common-practice",
+  "recalled",
+]);
 
 /** A source id: lower-case words joined by hyphens, resolving in data/sources.yaml. */
 export const SourceId = z.string().regex(
@@ -21,7 +31,7 @@ export const SourceId = z.string().regex(
 /** Provenance carried by a datum or an entry. */
 export const Provenance = z.object({
   source: SourceId,
-  basis: Basis,
+  basis: BasisSchema,
   /** Where our copy of the source came from, when transcribed from a copy. */
   copy: z.string().optional(),
   note: z.string().optional(),
@@ -41,7 +51,7 @@ export function quantity(dimension: Dimension) {
     /** Half-width of the spread between sources or stated uncertainty, same unit as value. */
     spread: z.number().nonnegative().optional(),
     source: SourceId.optional(),
-    basis: Basis.optional(),
+    basis: BasisSchema.optional(),
     at: z.string().optional(),
     note: z.string().optional(),
   }).superRefine((q, ctx) => {

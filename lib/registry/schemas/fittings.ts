@@ -7,13 +7,13 @@
  * @module
  */
 import { z } from "zod";
-import { Basis, EntryId, SourceId } from "./common.ts";
+import { BasisSchema, EntryId, SourceId } from "./common.ts";
 
 const finite = z.number().refine(Number.isFinite, "a finite number");
 
 const prov = {
   source: SourceId.optional(),
-  basis: Basis.optional(),
+  basis: BasisSchema.optional(),
   copy: z.string().optional(),
   note: z.string().optional(),
 };
@@ -98,8 +98,8 @@ export interface Fitting extends FittingProvenance {
   };
 }
 
-/** Schema of one fitting. */
-export const Fitting: z.ZodType<Fitting> = z.strictObject({
+/** Schema of one {@link Fitting}. */
+export const FittingSchema: z.ZodType<Fitting> = z.strictObject({
   id: EntryId,
   name: z.string().min(3),
   /** Other ids that resolve to this entry. */
@@ -147,5 +147,5 @@ export const Fitting: z.ZodType<Fitting> = z.strictObject({
 export const FittingsFile: z.ZodType = z.strictObject({
   kind: z.literal("fittings"),
   note: z.string().optional(),
-  fittings: z.array(Fitting).min(1),
+  fittings: z.array(FittingSchema).min(1),
 });

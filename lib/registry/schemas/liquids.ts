@@ -15,11 +15,11 @@
  * @module
  */
 import { z } from "zod";
-import { Basis, EntryId, range, SourceId } from "./common.ts";
+import { type Basis, BasisSchema, EntryId, range, SourceId } from "./common.ts";
 
 const Prov = {
   source: SourceId.optional(),
-  basis: Basis.optional(),
+  basis: BasisSchema.optional(),
   copy: z.string().optional(),
   note: z.string().optional(),
 };
@@ -108,8 +108,153 @@ export const ViscosityModel = z.discriminatedUnion("model", [
   }),
 ]);
 
-/** One liquid. */
-export const Liquid = z.strictObject({
+/** Provenance fields a liquid entry or one of its models may carry. */
+export interface LiquidProvenance {
+  /** Source id in data/sources.yaml. */
+  readonly source?: string;
+  /** How the datum got into the registry. */
+  readonly basis?: Basis;
+  /** Where our copy of the source came from, when transcribed from a copy. */
+  readonly copy?: string;
+  /** Free note. */
+  readonly note?: string;
+}
+
+/** A point of a liquid table: [temperature °C, value in the table's unit]. */
+export type LiquidPoint = readonly [number, number];
+
+/** A validity range as unit strings, for example `{ min: "0 degC", max: "95 degC" }`. */
+export interface LiquidRange {
+  /** Lower end, a unit string. */
+  readonly min: string;
+  /** Upper end, a unit string. */
+  readonly max: string;
+}
+
+/** Sound-speed model of a liquid entry: linear in temperature, a table, or Batzle–Wang. */
+export type LiquidSoundSpeedModel =
+  | (LiquidProvenance & {
+    readonly model: "linear";
+    /** Reference temperature, a unit string. */
+    readonly at: string;
+    /** Sound speed at `at`, m/s. */
+    readonly value: number;
+    readonly unit: "m/s";
+    /** Temperature slope, m/s per K. */
+    readonly slope: number;
+    /** Temperature curvature, m/s per K². */
+    readonly curvature?: number;
+    /** Pressure slope, m/s per MPa. */
+    readonly pressureSlope?: number;
+    /** Half-width of the spread, m/s. */
+    readonly spread: number;
+    /** Half-width of the spread of the slope, m/s per K. */
+    readonly slopeSpread?: number;
+  })
+  | (LiquidProvenance & {
+    readonly model: "table";
+    readonly unit: "m/s";
+    /** Points [°C, m/s], linear between points. */
+    readonly points: readonly LiquidPoint[];
+    /** Pressure slope, m/s per MPa. */
+    readonly pressureSlope?: number;
+    /** Points lie on the saturation line: pressure effects count from the vapour pressure. */
+    readonly atSaturation?: boolean;
+    /** Half-width of the spread, m/s. */
+    readonly spread: number;
+  })
+  | (LiquidProvenance & {
+    readonly model: "batzle-wang";
+    /** Half-width of the spread, m/s. */
+    readonly spread: number;
+  });
+
+/** Density model of a liquid entry: linear in temperature, a table, or Batzle–Wang. */
+export type LiquidDensityModel =
+  | (LiquidProvenance & {
+    readonly model: "linear";
+    /** Reference temperature, a unit string. */
+    readonly at: string;
+    /** Density at `at`, kg/m³. */
+    readonly value: number;
+    readonly unit: "kg/m^3";
+    /** Temperature slope, kg/m³ per K. */
+    readonly slope: number;
+    /** Half-width of the spread, kg/m³. */
+    readonly spread: number;
+  })
+  | (LiquidProvenance & {
+    readonly model: "table";
+    readonly unit: "kg/m^3";
+    /** Points [°C, kg/m³], linear between points. */
+    readonly points: readonly LiquidPoint[];
+    /** Half-width of the spread, kg/m³. */
+    readonly spread: number;
+  })
+  | (LiquidProvenance & {
+    readonly model: "batzle-wang";
+    /** Half-width of the spread, kg/m³. */
+    readonly spread: number;
+  });
+
+/** Viscosity model of a liquid entry: a table, ASTM D341 (Walther), or Batzle–Wang. */
+export type LiquidViscosityModel =
+  | (LiquidProvenance & {
+    readonly model: "table";
+    readonly unit: "mPa s" | "Pa s";
+    /** Points [°C, viscosity in `unit`]; ln μ linear in 1/T between points. */
+    readonly points: readonly LiquidPoint[];
+    /** Relative spread (0.2 = ±20 %). */
+    readonly spread: number;
+  })
+  | (LiquidProvenance & {
+    readonly model: "walther";
+    readonly unit: "mm^2/s";
+    /** Two kinematic-viscosity points [°C, mm²/s]. */
+    readonly points: readonly [LiquidPoint, LiquidPoint];
+    /** Relative spread (0.2 = ±20 %). */
+    readonly spread: number;
+  })
+  | (LiquidProvenance & {
+    readonly model: "batzle-wang";
+    /** Relative spread (0.2 = ±20 %). */
+    readonly spread: number;
+  });
+
+/** One liquid of data/liquids.yaml, as the loader validated it (units as in the file). */
+export interface LiquidEntry extends LiquidProvenance {
+  /** Entry id, for example `methanol`. */
+  readonly id: string;
+  /** Human name. */
+  readonly name: string;
+  /** Category, for example `alcohol` or `petroleum`. */
+  readonly category: string;
+  /** API gravity, for the Batzle–Wang models of petroleum liquids. */
+  readonly api?: number;
+  /** Mass fraction of the solute in water, for aqueous mixtures. */
+  readonly massFraction?: number;
+  /** Validity ranges (unit strings). */
+  readonly validity: {
+    /** Temperature range. */
+    readonly temperature: LiquidRange;
+    /** Pressure range, when stated. */
+    readonly pressure?: LiquidRange;
+  };
+  /** Vapour pressure points [°C, kPa]; ln p linear in 1/T. Below it the liquid boils. */
+  readonly vapourPressure?: LiquidProvenance & {
+    readonly unit: "kPa";
+    readonly points: readonly LiquidPoint[];
+  };
+  /** Sound-speed model. */
+  readonly soundSpeed: LiquidSoundSpeedModel;
+  /** Density model. */
+  readonly density: LiquidDensityModel;
+  /** Viscosity model. */
+  readonly viscosity: LiquidViscosityModel;
+}
+
+/** Schema of one {@link LiquidEntry}. */
+export const LiquidSchema: z.ZodType<LiquidEntry> = z.strictObject({
   id: EntryId,
   name: z.string(),
   category: z.string(),
@@ -128,11 +273,9 @@ export const Liquid = z.strictObject({
   density: DensityModel,
   viscosity: ViscosityModel,
 });
-/** One liquid. */
-export type Liquid = z.infer<typeof Liquid>;
 
 /** The liquids data file. */
 export const LiquidsFile = z.strictObject({
   kind: z.literal("liquids"),
-  liquids: z.array(Liquid).min(1),
+  liquids: z.array(LiquidSchema).min(1),
 });

@@ -11,7 +11,7 @@
 import { z } from "zod";
 import { parseQuantity } from "../../units.ts";
 import type { Dimension } from "../../units.ts";
-import { Basis, EntryId, range, SourceId } from "./common.ts";
+import { BasisSchema, EntryId, range, SourceId } from "./common.ts";
 
 /** Roles a material plays in a clamp-on path. */
 export const MaterialRole = z.enum(["wall", "lining", "wedge"]);
@@ -22,7 +22,7 @@ const provenanceFields = {
   /** Half-width of the spread between sources or stated uncertainty, same unit as value. */
   spread: z.number().nonnegative().optional(),
   source: SourceId.optional(),
-  basis: Basis.optional(),
+  basis: BasisSchema.optional(),
   copy: z.string().optional(),
   at: z.string().optional(),
   note: z.string().optional(),
@@ -104,7 +104,7 @@ export const TemperatureCoefficients = z.strictObject({
   /** Temperatures over which the linear coefficients hold. */
   range: range("temperature"),
   source: SourceId.optional(),
-  basis: Basis.optional(),
+  basis: BasisSchema.optional(),
   copy: z.string().optional(),
   note: z.string().optional(),
 });
@@ -135,7 +135,7 @@ export const Material = z.strictObject({
   roles: z.array(MaterialRole).min(1),
   /** Default provenance for every datum of the entry that names none of its own. */
   source: SourceId,
-  basis: Basis,
+  basis: BasisSchema,
   copy: z.string().optional(),
   note: z.string().optional(),
   /** Temperature at which speeds and density are given. */

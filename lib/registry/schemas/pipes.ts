@@ -9,7 +9,7 @@
  * @module
  */
 import { z } from "zod";
-import { Basis, EntryId, SourceId } from "./common.ts";
+import { BasisSchema, EntryId, SourceId } from "./common.ts";
 
 /** A size as the trade writes it: "1/8", "1-1/2", "4", "13.5". */
 export const SizeLabel = z.string().regex(
@@ -23,7 +23,7 @@ const positiveMm = z.number().refine((x) => Number.isFinite(x) && x > 0, "a posi
 export const WallOverride = z.strictObject({
   valueMm: positiveMm,
   source: SourceId.optional(),
-  basis: Basis,
+  basis: BasisSchema,
   spreadMm: z.number().nonnegative().optional(),
   note: z.string().optional(),
 });
@@ -53,7 +53,7 @@ export const LiningRule = z.strictObject({
 export const DefaultLining = z.strictObject({
   material: EntryId,
   source: SourceId,
-  basis: Basis,
+  basis: BasisSchema,
   copy: z.string().optional(),
   spreadMm: z.number().nonnegative().optional(),
   note: z.string().optional(),
@@ -63,7 +63,7 @@ export const DefaultLining = z.strictObject({
 /** Provenance of the walls when it differs from that of the outside diameters. */
 export const WallProvenance = z.strictObject({
   source: SourceId,
-  basis: Basis,
+  basis: BasisSchema,
   note: z.string().optional(),
 });
 
@@ -86,7 +86,7 @@ export const PipesFile = z.strictObject({
   sizeSystem: z.string().min(1),
   material: EntryId,
   source: SourceId,
-  basis: Basis,
+  basis: BasisSchema,
   copy: z.string().optional(),
   note: z.string().optional(),
   /** Half-width of the spread on walls (mm), for recalled data. */

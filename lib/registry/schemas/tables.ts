@@ -4,7 +4,7 @@
  * @module
  */
 import { z } from "zod";
-import { Basis, EntryId, SourceId } from "./common.ts";
+import { BasisSchema, EntryId, SourceId } from "./common.ts";
 
 /** A coefficient set of a published formulation (IAPWS-95, IF97, Del Grosso–Mader, …). */
 export const CoefficientsFile = z.strictObject({
@@ -12,7 +12,7 @@ export const CoefficientsFile = z.strictObject({
   id: EntryId,
   formulation: z.string(),
   source: SourceId,
-  basis: Basis,
+  basis: BasisSchema,
   copy: z.string().optional(),
   note: z.string().optional(),
   /** Validity, as unit strings, for example { temperature: { min: "0 degC", max: "95 degC" } }. */
@@ -31,7 +31,7 @@ export const VerificationFile = z.strictObject({
   id: EntryId,
   formulation: z.string(),
   source: SourceId,
-  basis: Basis,
+  basis: BasisSchema,
   copy: z.string().optional(),
   note: z.string().optional(),
   /** Column names with their units, for example { T: "K", rho: "kg/m^3", w: "m/s" }. */
@@ -49,7 +49,7 @@ export const TableFile = z.strictObject({
   id: EntryId,
   title: z.string(),
   source: SourceId,
-  basis: Basis,
+  basis: BasisSchema,
   copy: z.string().optional(),
   note: z.string().optional(),
   columns: z.record(z.string(), z.string()),

@@ -9,7 +9,7 @@
  * @module
  */
 import { z } from "zod";
-import { Basis, EntryId, SourceId } from "./common.ts";
+import { BasisSchema, EntryId, SourceId } from "./common.ts";
 
 const nonNeg = z.number().refine((x) => Number.isFinite(x) && x >= 0, "a number ≥ 0");
 
@@ -44,7 +44,7 @@ export const ToleranceSet = z.strictObject({
   /** Material ids this set is the default for. */
   materials: z.array(EntryId).default([]),
   source: SourceId,
-  basis: Basis,
+  basis: BasisSchema,
   copy: z.string().optional(),
   note: z.string().optional(),
   rules: z.array(ToleranceRule).min(1),

@@ -1,0 +1,525 @@
+/**
+ * Reports of site plans: terminal text, Markdown, JSON, a fleet CSV and an HTML page with inline
+ * SVG drawings. Reads plans; computes no physics. Every report names the registry hash and lists
+ * the trace.
+ *
+ * @module
+ */
+import type { SitePlan } from "../site/plan.ts";
+import type { Reconciliation } from "../site/reconcile.ts";
+import {
+  csvTable,
+  escapeHtml,
+  formatQuantity,
+  htmlPage,
+  markdownTable,
+  textTable,
+} from "./format.ts";
+import { svgAxialPath, svgPipeSection, svgRun } from "./drawings.ts";
+import { svgBarChart, svgLineChart } from "./svg.ts";
+
+const DEG = 180 / Math.PI;
+const pct = (x: number, d = 3) => `${Number((x * 100).toPrecision(d))} %`;
+const mm = (x: number, d = 4) => formatQuantity(x, "mm", d);
+
+/** Safety cautions every plan report carries, besides the plan's own. */
+export const REPORT_SAFETY =
+  "Safety: work on live, hot or pressurised lines, lifting lagging or insulation, hazardous " +
+  "areas, confined spaces and work at height each need the site's permits and trained people. " +
+  "Local codes and licensed practice take precedence over this report.";
+
+function verdictLine(p: SitePlan): string {
+  if (!p.target) return "no target uncertainty stated";
+  return p.target.reachable
+    ? `target ${pct(p.target.uncertainty)} reachable here: worst expanded ${pct(p.target.worstExpanded)} (${p.target.worstPoint} flow)`
+    : `target ${pct(p.target.uncertainty)} NOT reachable as planned: worst expanded ${pct(p.target.worstExpanded)} (${p.target.worstPoint} flow)`;
+}
+
+function mountingRows(p: SitePlan): (string | number)[][] {
+  return p.mountings.map((m) => [
+    `${m.name} (${m.traverses})`,
+    mm(m.spacing),
+    `${mm(m.searchWindow.range.min)} – ${mm(m.searchWindow.range.max)}`,
+    `${(m.fluidAngle * DEG).toFixed(2)}°`,
+    m.wallMode,
+    m.times.map((t) => formatQuantity(t.deltaT, "ns", 3)).join(" / "),
+    m.resolvableAtMinimum ? "yes" : "no",
+    `${m.signal.rating} (${m.signal.totalDb.toFixed(0)} dB)`,
+    m.wallBorne.overlaps ? "overlaps" : "clear",
+    m.expandedByPoint.map((x) => pct(x)).join(" / "),
+  ]);
+}
+
+const MOUNTING_HEADERS = [
+  "mounting",
+  "spacing",
+  "search window",
+  "liquid angle",
+  "wall wave",
+  "Δt min/…/max",
+  "resolvable",
+  "signal",
+  "wall signal",
+  "U (k=2) min/…/max",
+];
+
+function pointRows(p: SitePlan): (string | number)[][] {
+  return p.operatingPoints.map((o) => [
+    o.label,
+    formatQuantity(o.flowRate, "L/s", 4),
+    formatQuantity(o.meanVelocity, "m/s", 3),
+    Number(o.reynolds.toPrecision(3)).toExponential(2),
+    o.regime,
+    `${o.profileFactor.toFixed(4)} ± ${o.profileFactorSpread.toFixed(4)}`,
+  ]);
+}
+
+const POINT_HEADERS = ["flow", "flow rate", "mean velocity", "Reynolds", "regime", "profile factor"];
+
+function budgetRows(p: SitePlan): (string | number)[][] {
+  return p.uncertainty.budget.map((b) => [
+    b.name,
+    pct(b.relativeContribution),
+    pct(b.share, 2),
+    b.distribution,
+    b.source,
+    b.basis,
+  ]);
+}
+
+const BUDGET_HEADERS = ["contributor", "u (relative)", "share", "distribution", "source", "basis"];
+
+function traceRows(p: SitePlan | Reconciliation): (string | number)[][] {
+  return p.trace.map((t) => [
+    t.quantity,
+    typeof t.value === "number" ? Number(t.value.toPrecision(6)) : t.value,
+    t.unit,
+    t.source,
+    t.basis,
+  ]);
+}
+
+const TRACE_HEADERS = ["quantity", "value", "unit", "source", "basis"];
+
+/**
+ * The plan as terminal text.
+ *
+ * @param p a plan from planSite
+ * @returns text with tables, verdict, straight run, budget, cautions, warnings and trace
+ *
+ * @example
+ * ```ts
+ * import { planText } from "./plan_report.ts";
+ * import { readSiteText } from "../site/read.ts";
+ * import { planSite } from "../site/plan.ts";
+ * const plan = planSite(await readSiteText(`
+ * name: Example (invented)
+ * pipe: { standard: ASME B36.10M, nps: "4", schedule: "40", material: carbon-steel }
+ * fluid: { liquid: water, temperature: 20 degC }
+ * flow: { minimum: 2 L/s, maximum: 10 L/s }
+ * transducer: { wedgeSoundSpeed: 2720 m/s, wedgeAngle: 38 deg, frequency: 1 MHz }
+ * `), { monteCarlo: false });
+ * if (!planText(plan).includes(plan.registryHash)) throw new Error();
+ * ```
+ */
+export function planText(p: SitePlan): string {
+  const out: string[] = [];
+  out.push(`${p.name}${p.invented ? "  [invented scenario]" : ""}`);
+  out.push(`registry ${p.registryHash}`);
+  out.push("");
+  out.push(
+    `pipe   ${p.pipe.description}, ${p.pipe.material}: OD ${mm(p.pipe.outsideDiameter)}, wall ${
+      mm(p.pipe.wallThickness, 3)
+    }, bore ${mm(p.pipe.boreDiameter)}` +
+      (p.pipe.lining.length
+        ? `, lining ${p.pipe.lining.map((l) => `${l.material} ${mm(l.thickness, 2)}`).join(", ")}`
+        : ""),
+  );
+  out.push(
+    `fluid  ${p.fluid.name} at ${formatQuantity(p.fluid.temperature, "degC", 3)}, ${
+      formatQuantity(p.fluid.pressure, "bar", 3)
+    } abs: c ${formatQuantity(p.fluid.soundSpeed, "m/s", 5)} (± ${p.fluid.soundSpeedSpread.toFixed(1)}), ρ ${
+      formatQuantity(p.fluid.density, "kg/m^3", 4)
+    }, ν ${formatQuantity(p.fluid.kinematicViscosity, "mm^2/s", 3)}`,
+  );
+  out.push(
+    `wedge  ${formatQuantity(p.transducer.wedgeSoundSpeed, "m/s", 4)} at ${
+      (p.transducer.wedgeAngle * DEG).toFixed(1)
+    }°, ${formatQuantity(p.transducer.frequency, "MHz", 3)}`,
+  );
+  out.push("");
+  out.push(`verdict: ${verdictLine(p)}`);
+  for (const s of p.target?.suggestions ?? []) out.push(`  - ${s}`);
+  out.push(`recommended mounting: ${p.mountings.find((m) => m.traverses === p.recommendedMounting)?.name} (${p.recommendedMounting} traverses)`);
+  out.push("");
+  out.push(textTable(MOUNTING_HEADERS, mountingRows(p)));
+  out.push("");
+  out.push(textTable(POINT_HEADERS, pointRows(p)));
+  out.push(`profile factor changes by ${pct(p.profileFactorChange)} across the flow range`);
+  if (p.straightRun) {
+    const r = p.straightRun;
+    out.push("");
+    out.push(
+      `straight run ${formatQuantity(r.runLength, "m", 3)} from ${r.upstreamFitting} to ${r.downstreamFitting}: ` +
+        `${r.verdict} at ${formatQuantity(r.position, "m", 3)} (${r.positionSource}); ` +
+        `${r.upstreamDiameters.toFixed(1)} D upstream of ${r.requiredUpstream} D required, ` +
+        `${r.downstreamDiameters === null ? "—" : r.downstreamDiameters.toFixed(1)} D downstream of ${r.requiredDownstream} D`,
+    );
+    out.push(
+      `  common-practice position ${formatQuantity(r.commonPracticePosition, "m", 3)}; model-ranked position ` +
+        `${formatQuantity(r.recommendedPosition, "m", 3)} at ${(r.recommendedOrientation * DEG).toFixed(0)}°; ` +
+        `estimated profile error ${pct(r.estimatedProfileError, 2)} ± ${pct(r.estimatedProfileErrorSpread, 2)} (an estimate)`,
+    );
+    out.push(sketchRun(p));
+  }
+  out.push("");
+  out.push(
+    `uncertainty (${p.mountings.find((m) => m.traverses === p.uncertainty.mounting)?.name} mounting, ${p.uncertainty.operatingPoint} flow): ` +
+      `expanded ${pct(p.uncertainty.expanded)} (k = ${p.uncertainty.coverageFactor.toFixed(2)}, GUM)` +
+      (p.uncertainty.monteCarlo
+        ? `; Monte Carlo ${pct(p.uncertainty.monteCarlo.expanded)} (${p.uncertainty.monteCarlo.draws} draws, 95 %)`
+        : ""),
+  );
+  out.push(textTable(BUDGET_HEADERS, budgetRows(p)));
+  out.push("");
+  out.push("cautions:");
+  for (const c of p.cautions) out.push(`  - ${c}`);
+  if (p.warnings.length) {
+    out.push("warnings:");
+    for (const w of p.warnings) out.push(`  - ${w.message}`);
+  }
+  out.push("");
+  out.push(`trace (${p.trace.length} entries):`);
+  out.push(textTable(TRACE_HEADERS, traceRows(p)));
+  return out.join("\n") + "\n";
+}
+
+/** An ASCII sketch of the run: fittings, the requirement zones and the chosen position. */
+function sketchRun(p: SitePlan): string {
+  const r = p.straightRun!;
+  const W = 60;
+  const at = (x: number) => Math.max(0, Math.min(W - 1, Math.round(x / r.runLength * (W - 1))));
+  const line = Array.from({ length: W }, () => "=");
+  line[at(r.commonPracticePosition)] = "c";
+  line[at(r.position)] = "M";
+  return `  [${r.upstreamFitting}]${line.join("")}[${r.downstreamFitting}]   M meter, c common-practice position`;
+}
+
+/**
+ * The plan as Markdown.
+ *
+ * @param p a plan
+ * @returns Markdown text
+ */
+export function planMarkdown(p: SitePlan): string {
+  const out: string[] = [];
+  out.push(`# ${p.name}`);
+  if (p.invented) out.push("\n*Invented scenario: no figure here describes a real installation.*");
+  out.push(`\nRegistry hash: \`${p.registryHash}\`\n`);
+  out.push(`**Verdict:** ${verdictLine(p)}`);
+  for (const s of p.target?.suggestions ?? []) out.push(`- ${s}`);
+  out.push(`\n## Pipe and liquid\n`);
+  out.push(markdownTable(["quantity", "value"], [
+    ["pipe", `${p.pipe.description}, ${p.pipe.material}`],
+    ["outside diameter", mm(p.pipe.outsideDiameter)],
+    ["wall thickness", mm(p.pipe.wallThickness, 3)],
+    ["bore", mm(p.pipe.boreDiameter)],
+    ["liquid", `${p.fluid.name}, ${formatQuantity(p.fluid.temperature, "degC", 3)}`],
+    ["sound speed", formatQuantity(p.fluid.soundSpeed, "m/s", 5)],
+    ["density", formatQuantity(p.fluid.density, "kg/m^3", 4)],
+    ["kinematic viscosity", formatQuantity(p.fluid.kinematicViscosity, "mm^2/s", 3)],
+  ]));
+  out.push(`\n## Mountings\n`);
+  out.push(markdownTable(MOUNTING_HEADERS, mountingRows(p)));
+  out.push(`\n## Operating points\n`);
+  out.push(markdownTable(POINT_HEADERS, pointRows(p)));
+  if (p.straightRun) {
+    const r = p.straightRun;
+    out.push(`\n## Straight run\n`);
+    out.push(
+      `${r.verdict} at ${formatQuantity(r.position, "m", 3)} (${r.positionSource}); common-practice position ` +
+        `${formatQuantity(r.commonPracticePosition, "m", 3)}, model-ranked ${formatQuantity(r.recommendedPosition, "m", 3)}; ` +
+        `estimated profile error ${pct(r.estimatedProfileError, 2)} (an estimate, not a calibration).`,
+    );
+    for (const x of r.reasons) out.push(`- ${x}`);
+  }
+  out.push(`\n## Uncertainty budget\n`);
+  out.push(
+    `Expanded ${pct(p.uncertainty.expanded)} (k = ${p.uncertainty.coverageFactor.toFixed(2)}) at ${p.uncertainty.operatingPoint} flow` +
+      (p.uncertainty.monteCarlo ? `; Monte Carlo ${pct(p.uncertainty.monteCarlo.expanded)}.` : ".") + "\n",
+  );
+  out.push(markdownTable(BUDGET_HEADERS, budgetRows(p)));
+  out.push(`\n## Cautions\n`);
+  for (const c of p.cautions) out.push(`- ${c}`);
+  out.push(`- ${REPORT_SAFETY}`);
+  if (p.warnings.length) {
+    out.push(`\n## Warnings\n`);
+    for (const w of p.warnings) out.push(`- ${w.message}`);
+  }
+  out.push(`\n## Trace\n`);
+  out.push(markdownTable(TRACE_HEADERS, traceRows(p)));
+  return out.join("\n") + "\n";
+}
+
+/** Headers of the fleet summary (CSV and HTML index). */
+export const FLEET_HEADERS: readonly string[] = [
+  "id",
+  "name",
+  "verdict",
+  "mounting",
+  "spacing_mm",
+  "expanded_percent",
+  "straight_run",
+  "main_limitation",
+  "registry_hash",
+];
+
+/** One fleet summary row of a plan. */
+export function fleetRow(p: SitePlan): (string | number)[] {
+  const m = p.mountings.find((x) => x.traverses === p.recommendedMounting)!;
+  return [
+    p.id ?? "",
+    p.name,
+    p.target ? (p.target.reachable ? "reachable" : "not reachable") : "no target",
+    m.name,
+    Number((m.spacing * 1000).toFixed(2)),
+    Number((Math.max(...p.uncertainty.expandedByPoint.map((x) => x.expanded)) * 100).toFixed(3)),
+    p.straightRun?.verdict ?? "not assessed",
+    p.mainLimitation,
+    p.registryHash,
+  ];
+}
+
+/**
+ * A fleet summary as CSV: one row a site, plus one row per refused site.
+ *
+ * @param rows summary rows from {@link fleetRow}, or refusals `{ id, name, error }`
+ * @returns CSV text (RFC 4180)
+ */
+export function fleetCsv(
+  rows: readonly ((string | number)[] | { id: string; name: string; error: string })[],
+): string {
+  return csvTable(
+    FLEET_HEADERS,
+    rows.map((r) =>
+      Array.isArray(r) ? r : [r.id, r.name, `refused: ${r.error}`, "", "", "", "", "", ""]
+    ),
+  );
+}
+
+/**
+ * The plan as JSON text (SI throughout).
+ *
+ * @param p a plan
+ * @returns pretty JSON
+ */
+export function planJson(p: SitePlan | readonly SitePlan[]): string {
+  return JSON.stringify(p, null, 2) + "\n";
+}
+
+const EXTRA_CSS = `
+.verdict-ok{border-left:6px solid #2d6a4f;padding:.4em .8em;background:#eef6f1}
+.verdict-no{border-left:6px solid #9b2226;padding:.4em .8em;background:#fbeeee}
+figure{margin:1em 0} figure svg{max-width:100%;height:auto}
+.grid{display:grid;grid-template-columns:repeat(auto-fit,minmax(420px,1fr));gap:1em}
+small.hash{font-family:monospace;color:#555}
+`;
+
+function htmlTable(headers: readonly string[], rows: readonly (readonly (string | number)[])[]): string {
+  return `<table><thead><tr>${headers.map((h) => `<th>${escapeHtml(h)}</th>`).join("")}</tr></thead><tbody>` +
+    rows.map((r) => `<tr>${r.map((c) => `<td>${escapeHtml(String(c))}</td>`).join("")}</tr>`).join("") +
+    "</tbody></table>";
+}
+
+/**
+ * The plan as a self-contained HTML page with inline SVG drawings: the pipe in section and along
+ * its axis with the beam path for each mounting, the run with its fittings and positions, the
+ * estimated profile error along the run, spacing against temperature, and the budget as bars.
+ *
+ * @param p a plan
+ * @returns HTML text that opens offline
+ */
+export function planHtml(p: SitePlan): string {
+  const b: string[] = [];
+  b.push(`<h1>${escapeHtml(p.name)}</h1>`);
+  if (p.invented) b.push(`<p><em>Invented scenario: no figure here describes a real installation.</em></p>`);
+  b.push(`<p><small class="hash">registry ${p.registryHash}</small></p>`);
+  b.push(
+    `<p class="${p.target?.reachable === false ? "verdict-no" : "verdict-ok"}">${escapeHtml(verdictLine(p))}</p>`,
+  );
+  if (p.target?.suggestions.length) {
+    b.push(`<ul>${p.target.suggestions.map((s) => `<li>${escapeHtml(s)}</li>`).join("")}</ul>`);
+  }
+  b.push(`<h2>Pipe and liquid</h2>`);
+  b.push(htmlTable(["quantity", "value"], [
+    ["pipe", `${p.pipe.description}, ${p.pipe.material}`],
+    ["outside diameter", mm(p.pipe.outsideDiameter)],
+    ["wall thickness", mm(p.pipe.wallThickness, 3)],
+    ["bore", mm(p.pipe.boreDiameter)],
+    ["lining", p.pipe.lining.map((l) => `${l.material} ${mm(l.thickness, 2)}`).join(", ") || "none"],
+    ["liquid", `${p.fluid.name} at ${formatQuantity(p.fluid.temperature, "degC", 3)}`],
+    ["sound speed", formatQuantity(p.fluid.soundSpeed, "m/s", 5)],
+    ["kinematic viscosity", formatQuantity(p.fluid.kinematicViscosity, "mm^2/s", 3)],
+  ]));
+  b.push(`<h2>Mountings</h2>`);
+  b.push(htmlTable(MOUNTING_HEADERS, mountingRows(p)));
+  const lin = p.pipe.lining.reduce((s, l) => s + l.thickness, 0);
+  b.push(`<div class="grid">`);
+  const rec = p.mountings.find((m) => m.traverses === p.recommendedMounting)!;
+  b.push(`<figure>${
+    svgPipeSection({
+      outsideDiameter: p.pipe.outsideDiameter,
+      wallThickness: p.pipe.wallThickness,
+      liningThickness: lin || undefined,
+      traverses: rec.traverses,
+      fluidAngle: rec.fluidAngle,
+      title: `Cross-section, ${rec.name} mounting`,
+    })
+  }</figure>`);
+  for (const m of p.mountings) {
+    b.push(`<figure>${
+      svgAxialPath({
+        outsideDiameter: p.pipe.outsideDiameter,
+        wallThickness: p.pipe.wallThickness,
+        liningThickness: lin || undefined,
+        spacing: m.spacing,
+        traverses: m.traverses,
+        fluidAngle: m.fluidAngle,
+        wallAngle: m.wallAngle,
+        title: `${m.name} mounting (${m.traverses} traverses): spacing ${mm(m.spacing)}`,
+      })
+    }</figure>`);
+  }
+  b.push(`</div>`);
+  const temps = p.mountings.filter((m) => m.overTemperature);
+  if (temps.length) {
+    b.push(`<figure>${
+      svgLineChart({
+        title: "Spacing against liquid temperature",
+        xLabel: "liquid temperature (°C)",
+        yLabel: "spacing (mm)",
+        series: temps.map((m) => ({
+          name: `${m.name} mounting`,
+          points: m.overTemperature!.map((r) => [r.temperature - 273.15, r.spacing * 1000] as const),
+        })),
+      })
+    }</figure>`);
+  }
+  b.push(`<h2>Operating points</h2>`);
+  b.push(htmlTable(POINT_HEADERS, pointRows(p)));
+  if (p.straightRun) {
+    const r = p.straightRun;
+    b.push(`<h2>Straight run</h2>`);
+    b.push(
+      `<p>${escapeHtml(`${r.verdict} at ${formatQuantity(r.position, "m", 3)} (${r.positionSource}). Common-practice position ${formatQuantity(r.commonPracticePosition, "m", 3)}; model-ranked position ${formatQuantity(r.recommendedPosition, "m", 3)}. Estimated profile error ${pct(r.estimatedProfileError, 2)} ± ${pct(r.estimatedProfileErrorSpread, 2)}: an estimate from a model, not a calibration.`)}</p>`,
+    );
+    b.push(`<ul>${r.reasons.map((x) => `<li>${escapeHtml(x)}</li>`).join("")}</ul>`);
+    b.push(`<figure>${
+      svgRun({
+        runLength: r.runLength,
+        diameter: p.pipe.boreDiameter,
+        upstreamLabel: r.upstreamFitting,
+        downstreamLabel: r.downstreamFitting,
+        requiredUpstream: Math.min(r.requiredUpstream * p.pipe.boreDiameter, r.runLength),
+        requiredDownstream: Math.min(r.requiredDownstream * p.pipe.boreDiameter, r.runLength),
+        recommendedPosition: r.recommendedPosition,
+        commonPracticePosition: r.commonPracticePosition,
+      })
+    }</figure>`);
+    b.push(`<figure>${
+      svgLineChart({
+        title: "Estimated profile error along the run (model estimate)",
+        xLabel: "distance from the upstream fitting (m)",
+        yLabel: "estimated error (%)",
+        series: [{ name: "estimate", points: r.errorAlongRun.map((x) => [x.position, x.error * 100] as const) }],
+        vLines: [{ x: r.position, label: "meter" }],
+      })
+    }</figure>`);
+  }
+  b.push(`<h2>Uncertainty budget</h2>`);
+  b.push(
+    `<p>${escapeHtml(`Expanded ${pct(p.uncertainty.expanded)} (k = ${p.uncertainty.coverageFactor.toFixed(2)}, GUM) at ${p.uncertainty.operatingPoint} flow` + (p.uncertainty.monteCarlo ? `; Monte Carlo ${pct(p.uncertainty.monteCarlo.expanded)} from ${p.uncertainty.monteCarlo.draws} draws.` : "."))}</p>`,
+  );
+  b.push(`<figure>${
+    svgBarChart({
+      title: "Relative standard uncertainty contributions",
+      unit: "%",
+      bars: p.uncertainty.budget.map((x) => ({ label: x.name, value: x.relativeContribution * 100 })),
+    })
+  }</figure>`);
+  b.push(htmlTable(BUDGET_HEADERS, budgetRows(p)));
+  b.push(`<h2>Cautions</h2><ul>${
+    [...p.cautions, REPORT_SAFETY].map((c) => `<li>${escapeHtml(c)}</li>`).join("")
+  }</ul>`);
+  if (p.warnings.length) {
+    b.push(`<h2>Warnings</h2><ul>${p.warnings.map((w) => `<li>${escapeHtml(w.message)}</li>`).join("")}</ul>`);
+  }
+  b.push(`<h2>Trace</h2>`);
+  b.push(htmlTable(TRACE_HEADERS, traceRows(p)));
+  return htmlPage({ title: p.name, body: b.join("\n"), css: EXTRA_CSS });
+}
+
+/**
+ * The HTML index of a fleet: the summary table linking each site's page.
+ *
+ * @param rows summary rows (from {@link fleetRow}) with the page file name, or refusals
+ * @param title page title
+ * @returns HTML text
+ */
+export function fleetHtml(
+  rows: readonly ({ row: (string | number)[]; href: string } | { id: string; name: string; error: string })[],
+  title = "Fleet summary",
+): string {
+  const body = `<h1>${escapeHtml(title)}</h1><table><thead><tr>${
+    FLEET_HEADERS.map((h) => `<th>${escapeHtml(h)}</th>`).join("")
+  }</tr></thead><tbody>${
+    rows.map((r) =>
+      "row" in r
+        ? `<tr>${r.row.map((c, i) =>
+          i === 1
+            ? `<td><a href="${escapeHtml(r.href)}">${escapeHtml(String(c))}</a></td>`
+            : `<td>${escapeHtml(String(c))}</td>`
+        ).join("")}</tr>`
+        : `<tr><td>${escapeHtml(r.id)}</td><td>${escapeHtml(r.name)}</td><td colspan="7">refused: ${escapeHtml(r.error)}</td></tr>`
+    ).join("")
+  }</tbody></table><p>${escapeHtml(REPORT_SAFETY)}</p>`;
+  return htmlPage({ title, body, css: EXTRA_CSS });
+}
+
+/**
+ * A reconciliation as terminal text.
+ *
+ * @param r a reconciliation
+ * @returns text
+ */
+export function reconciliationText(r: Reconciliation): string {
+  const out: string[] = [`${r.name}`, `registry ${r.registryHash}`, ""];
+  out.push(
+    `liquid temperature ${formatQuantity(r.temperature, "degC", 3)}, wall ${mm(r.wallThickness, 3)}`,
+  );
+  out.push(textTable(
+    ["mounting", "liquid time", "planned", "inferred c", "registry c", "difference", "agrees"],
+    r.mountings.map((m) => [
+      String(m.traverses),
+      formatQuantity(m.measuredLiquidTime, "us", 5),
+      formatQuantity(m.plannedLiquidTime, "us", 5),
+      formatQuantity(m.inferredSoundSpeed, "m/s", 5),
+      formatQuantity(m.registrySoundSpeed, "m/s", 5),
+      `${m.difference.toFixed(1)} ± ${m.tolerance.toFixed(1)} m/s`,
+      m.consistent ? "yes" : "no",
+    ]),
+  ));
+  for (const m of r.mountings) {
+    for (const c of m.causes) {
+      out.push(`  ${m.traverses}: ${c.plausible ? "likely" : "unlikely"} ${c.cause}: ${c.explanation}`);
+    }
+    if (m.flow) {
+      out.push(
+        `  ${m.traverses}: flow ${formatQuantity(m.flow.plannedFlowRate, "L/s", 4)} as planned → ` +
+          `${formatQuantity(m.flow.correctedFlowRate, "L/s", 4)} corrected (${pct(m.flow.relativeCorrection, 2)})`,
+      );
+    }
+  }
+  out.push("", r.summary);
+  return out.join("\n") + "\n";
+}
