@@ -162,42 +162,62 @@ export function gibbsSeawater(SA: number, T: number, p: number): GibbsDerivative
 
 const out: GibbsDerivatives = { g: 0, gT: 0, gP: 0, gTT: 0, gTP: 0, gPP: 0 };
 
-/** Reduced g, g_τ, g_ττ on the 101 325 Pa isobar (π = 0: the k = 0 column), into `iso`. */
-const iso = new Float64Array(3);
-function evaluateP0(t: GibbsTables, c: Float64Array, tau: number): Float64Array {
-  const W = t.K + 1;
-  let a0 = 0, a1 = 0, a2 = 0;
-  for (let j = t.J; j >= 0; j--) {
-    a2 = a2 * tau + a1;
-    a1 = a1 * tau + a0;
-    a0 = a0 * tau + c[j * W];
-  }
-  iso[0] = a0;
-  iso[1] = a1;
-  iso[2] = 2 * a2;
-  return iso;
-}
-
 /**
  * θ for potentialTemperature and conservativeTemperature, checks done. Newton's method on
- * g_T(S_A, θ, p0) = g_T(S_A, T, p) over the 101 325 Pa isobar of the collapsed polynomial,
- * started from the linear lapse-rate estimate θ₀ = T + (g_Tp/g_TT)(p − p0) at (T, p).
+ * g_T(S_A, θ, p0) = g_T(S_A, T, p) over the 101 325 Pa isobar of the collapsed polynomial (its
+ * k = 0 column), started from the linear lapse-rate estimate θ₀ = T + (g_Tp/g_TT)(p − p0) at
+ * (T, p). Works in the reduced τ = (θ − T0)/40 K.
  */
 function theta(SA: number, T: number, p: number): number {
   const t = load();
   const c = collapse(t, SA);
-  evaluate(t, c, (T - T0) / TU, (p - P0) / PU);
-  const eta = out.gT * TU; // reduced: ∂g/∂τ
-  let th = T + (out.gTP / out.gTT) * (p - P0);
+  const W = t.K + 1, J = t.J, K = t.K;
+  // Reduced g_τ, g_ττ, g_τπ at (T, p): rows j ≥ 1 summed in π (value, derivative), then τ.
+  const tau0 = (T - T0) / TU, pi = (p - P0) / PU;
+  let e0 = 0, e1 = 0, f0 = 0;
+  for (let j = J; j > 0; j--) {
+    let q = 0, q1 = 0;
+    for (let k = j * W + K; k >= j * W; k--) {
+      q1 = q1 * pi + q;
+      q = q * pi + c[k];
+    }
+    e1 = e1 * tau0 + e0;
+    e0 = e0 * tau0 + j * q;
+    f0 = f0 * tau0 + j * q1;
+  }
+  const eta = e0; // ∂g/∂τ at (T, p)
+  let th = T + (f0 * TU / (e1 * PU)) * (p - P0);
   for (let n = 0; n < 30; n++) {
-    const r = evaluateP0(t, c, (th - T0) / TU);
-    const step = TU * (r[1] - eta) / r[2];
-    th -= step;
-    if (Math.abs(step) < 1e-12) return th;
+    const tau = (th - T0) * (1 / TU);
+    let a0 = 0, a1 = 0, a2 = 0;
+    for (let j = J; j > 0; j--) {
+      a2 = a2 * tau + a1;
+      a1 = a1 * tau + a0;
+      a0 = a0 * tau + j * c[j * W];
+    }
+    // On the isobar: a0 = ∂g/∂τ, a1 = ∂²g/∂τ², a2 = ½ ∂³g/∂τ³. Newton step in τ, and the
+    // error left after it, |½ f''/f'| s² (quadratic convergence), as a stopping test.
+    const s = (a0 - eta) / a1;
+    th -= TU * s;
+    if (Math.abs(s) < 1e-12 / TU || Math.abs(a2 / a1) * s * s < 1e-15 / TU) return th;
   }
   throw new NoPhysicalAnswerError(
     `potential temperature did not converge at S_A ${SA} kg/kg, T ${T} K, p ${p} Pa`,
   );
+}
+
+/** Potential enthalpy h0 = g − θ g_T at (S_A, θ, p0), J/kg, from the collapsed polynomial. */
+function potentialEnthalpy(SA: number, th: number): number {
+  const t = load();
+  const c = collapse(t, SA);
+  const W = t.K + 1;
+  const tau = (th - T0) / TU;
+  let a0 = 0, a1 = 0;
+  for (let j = t.J * W; j >= 0; j -= W) {
+    a1 = a1 * tau + a0;
+    a0 = a0 * tau + c[j];
+  }
+  return a0 - th * a1 / TU;
 }
 
 const SA_RANGE: [number, number] = [0, 0.042];
@@ -271,9 +291,7 @@ export function conservativeTemperature(
 ): number {
   checkState(SA, T, p, options);
   const th = theta(SA, T, p);
-  const t = load();
-  const r = evaluateP0(t, collapse(t, SA), (th - T0) / TU);
-  return (r[0] - th * r[1] / TU) / CP0;
+  return potentialEnthalpy(SA, th) / CP0;
 }
 
 /**

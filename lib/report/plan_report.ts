@@ -386,6 +386,7 @@ export function planHtml(p: SitePlan): string {
         traverses: m.traverses,
         fluidAngle: m.fluidAngle,
         wallAngle: m.wallAngle,
+        liningAngle: m.liningAngles[0],
         title: `${m.name} mounting (${m.traverses} traverses): spacing ${mm(m.spacing)}`,
       })
     }</figure>`);
@@ -420,8 +421,8 @@ export function planHtml(p: SitePlan): string {
         diameter: p.pipe.boreDiameter,
         upstreamLabel: r.upstreamFitting,
         downstreamLabel: r.downstreamFitting,
-        requiredUpstream: Math.min(r.requiredUpstream * p.pipe.boreDiameter, r.runLength),
-        requiredDownstream: Math.min(r.requiredDownstream * p.pipe.boreDiameter, r.runLength),
+        requiredUpstream: r.requiredUpstream * p.pipe.boreDiameter,
+        requiredDownstream: r.requiredDownstream * p.pipe.boreDiameter,
         recommendedPosition: r.recommendedPosition,
         commonPracticePosition: r.commonPracticePosition,
       })

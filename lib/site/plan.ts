@@ -137,6 +137,8 @@ export interface MountingPlan {
   readonly fluidAngle: number;
   /** Wall angle, rad. */
   readonly wallAngle: number;
+  /** Angles in the lining layers, rad. */
+  readonly liningAngles: readonly number[];
   /** Wall mode the spacing is for. */
   readonly wallMode: string;
   /** Modes considered, with their role. */
@@ -607,6 +609,7 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
       referenceMarkDistance: path.referenceMarkDistance,
       fluidAngle: path.fluidAngle,
       wallAngle: path.wallAngle,
+      liningAngles: path.liningAngles,
       wallMode: path.wallMode,
       modes: path.modes,
       fluidPathLength: path.fluidPathLength,

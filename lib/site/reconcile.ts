@@ -9,6 +9,7 @@ import { InputError, type Warning } from "../errors.ts";
 import { trace as traceEntry, type TraceEntry } from "../trace.ts";
 import { defaultRegistry, type Registry } from "../registry/mod.ts";
 import { liquidProperties, liquids } from "../liquids/mod.ts";
+import { profileFactor } from "../flow/mod.ts";
 import { planSite, type SitePlan } from "./plan.ts";
 import type { SiteInput } from "./schema.ts";
 
@@ -93,6 +94,8 @@ export interface Reconciliation {
 export const RECONCILE_BOUNDS = {
   /** Largest plausible error in the stated liquid temperature, K. */
   temperature: 15,
+  /** Largest plausible error in a liquid temperature measured on site, K. */
+  measuredTemperature: 2,
   /** Largest plausible wall (or lining build-up) error, relative to the wall thickness. */
   wallRelative: 0.5,
   /** A sound speed this far below the registry's points to entrained gas, relative. */
@@ -252,20 +255,45 @@ export function reconcile(
     const causes: MismatchCause[] = [];
     if (!consistent) {
       if (dcdT !== 0) {
-        const dT = diff / dcdT;
+        // the temperature at which the registry's speed equals the inferred one (Newton steps
+        // on c(T), started from the linear estimate)
+        const opts = { salinity: site.fluid.salinity, extrapolate: true, warnings: [] };
+        const cAt = (x: number) => liquidProperties(site.fluid.liquid, x, site.fluid.pressure, opts).soundSpeed;
+        let Tx = T + diff / dcdT;
+        for (let j = 0; j < 6; j++) {
+          try {
+            const f0 = cAt(Tx) - c;
+            const d = cAt(Tx + 0.05) - cAt(Tx - 0.05);
+            if (!(Math.abs(d) > 0)) break;
+            const step = f0 / (d / 0.1);
+            Tx -= step;
+            if (Math.abs(step) < 1e-6) break;
+          } catch {
+            break;
+          }
+        }
+        const dT = Tx - T;
+        const bound = readings.temperature !== undefined
+          ? RECONCILE_BOUNDS.measuredTemperature
+          : RECONCILE_BOUNDS.temperature;
         causes.push({
           cause: "temperature",
           explanation: `the liquid would be at ${(T + dT - 273.15).toFixed(1)} °C, ` +
             `${Math.abs(dT).toFixed(1)} K ${dT > 0 ? "warmer" : "colder"} than stated`,
-          plausible: Math.abs(dT) <= RECONCILE_BOUNDS.temperature,
-          score: Math.abs(dT) / RECONCILE_BOUNDS.temperature,
+          plausible: Math.abs(dT) <= bound,
+          score: Math.abs(dT) / bound,
         });
       }
-      const needBore = tau * cReg * Math.sqrt(1 - s * s * cReg * cReg) / r.traverses;
-      const dWall = (bore - needBore) / 2;
+      // the wall change Δ that explains the total time with the registry's speed: the wall time
+      // grows by wallTime/wall per metre while the liquid time shrinks by 2·fluidTime/bore
+      const plannedTotal = m.wallTime + m.liningTime + m.fluidTime;
+      const measuredTotal = r.totalTime - fixed;
+      const slope = m.wallTime / wall - 2 * m.fluidTime / bore;
+      const dWall = (measuredTotal - plannedTotal) / slope;
+      const needBore = bore - 2 * dWall;
       causes.push({
         cause: "wall-or-lining",
-        explanation: `the wall (or lining, or deposits) would be ${Math.abs(dWall * 1e3).toFixed(2)} mm ` +
+        explanation: `the wall (or lining, or scale and deposits inside) would be ${Math.abs(dWall * 1e3).toFixed(2)} mm ` +
           `${dWall > 0 ? "thicker" : "thinner"} than planned (bore ${(needBore * 1e3).toFixed(1)} mm)`,
         plausible: Math.abs(dWall) <= RECONCILE_BOUNDS.wallRelative * wall,
         score: Math.abs(dWall) / (RECONCILE_BOUNDS.wallRelative * wall),
@@ -294,7 +322,8 @@ export function reconcile(
           ? `the speed matches ${matches.slice(0, 5).join(", ")} at this temperature`
           : "no registry liquid matches this speed at this temperature",
         plausible: matches.length > 0,
-        score: matches.length > 0 ? 0.5 : 2,
+        // a change of liquid is the least likely explanation when the liquid is named
+        score: matches.length > 0 ? 1.5 : 3,
       });
       if (diff < -RECONCILE_BOUNDS.gasRelative * cReg) {
         causes.push({
@@ -302,7 +331,7 @@ export function reconcile(
           explanation: `${(-diff / cReg * 100).toFixed(1)} % below the registry's speed: ` +
             "entrained air or gas lowers the apparent speed and weakens the signal",
           plausible: true,
-          score: 0.8,
+          score: 1.2,
         });
       }
       causes.sort((a, b) => Number(b.plausible) - Number(a.plausible) || a.score - b.score);
@@ -310,12 +339,22 @@ export function reconcile(
     let flow: MountingReconciliation["flow"];
     const pm = planned.mountings.find((x) => x.traverses === r.traverses) ??
       plan.mountings.find((x) => x.traverses === r.traverses)!;
-    const k = plan.operatingPoints[0].profileFactor;
+    // profile factor at the velocity read: iterate v → Re → k (three steps converge)
+    const nu = plan.fluid.kinematicViscosity;
+    const kFor = (vPath: number) => {
+      let k = plan.operatingPoints[0].profileFactor;
+      for (let j = 0; j < 4; j++) {
+        k = profileFactor(Math.max(1, Math.abs(k * vPath) * bore / nu), { extrapolate: true, warnings: [] });
+      }
+      return k;
+    };
     const areaPlanned = Math.PI / 4 * planned.pipe.boreDiameter ** 2;
     const areaNow = Math.PI / 4 * bore ** 2;
     if (r.deltaT !== undefined) {
-      const vPlanned = k * cw * r.deltaT / (2 * Math.sin(plan.transducer.wedgeAngle) * pm.fluidTime);
-      const vNow = k * cw * r.deltaT / (2 * Math.sin(plan.transducer.wedgeAngle) * tau);
+      const pathPlanned = cw * r.deltaT / (2 * Math.sin(plan.transducer.wedgeAngle) * pm.fluidTime);
+      const pathNow = cw * r.deltaT / (2 * Math.sin(plan.transducer.wedgeAngle) * tau);
+      const vPlanned = kFor(pathPlanned) * pathPlanned;
+      const vNow = kFor(pathNow) * pathNow;
       flow = {
         plannedVelocity: vPlanned,
         correctedVelocity: vNow,
