@@ -20,6 +20,8 @@ export const DEBIAN_PACKAGE: Record<string, string> = {
   fluids: "python3-fluids",
   gsw: "python3-gsw",
   numpy: "python3-numpy",
+  scipy: "python3-scipy",
+  uncertainties: "python3-uncertainties",
 };
 
 /**

@@ -40,15 +40,40 @@ export interface If97Region1State {
 // Scratch: γ, γ_π, γ_ππ, γ_τ, γ_ττ, γ_πτ
 const G = new Float64Array(6);
 
+// Integer powers of (7.1 − π) and (τ − 1.222) by running products, sized on first use.
+let powA = new Float64Array(0);
+let powB = new Float64Array(0);
+let jMin = 0;
+
+function sizeTables(k: { I: ArrayLike<number>; J: ArrayLike<number> }): void {
+  let iMax = 0, jLo = 0, jHi = 0;
+  for (let i = 0; i < k.I.length; i++) {
+    iMax = Math.max(iMax, k.I[i]);
+    jLo = Math.min(jLo, k.J[i]);
+    jHi = Math.max(jHi, k.J[i]);
+  }
+  powA = new Float64Array(iMax + 1);
+  powB = new Float64Array(jHi - jLo + 1);
+  jMin = jLo;
+}
+
 function gibbs(pi: number, tau: number): void {
   const k = if97Region1Coefficients();
+  if (powA.length === 0) sizeTables(k);
   const a = 7.1 - pi, b = tau - 1.222;
   const ia = 1 / a, ib = 1 / b;
-  // b can be negative (τ < 1.222 ⇔ T > 1134 K, outside region 1), so keep integer powers exact.
+  // b can be negative (τ < 1.222 ⇔ T > 1134 K, outside region 1): integer powers by products
+  // keep the sign. powB[J − jMin] = b^J.
+  powA[0] = 1;
+  for (let i = 1; i < powA.length; i++) powA[i] = powA[i - 1] * a;
+  const z = -jMin;
+  powB[z] = 1;
+  for (let i = z + 1; i < powB.length; i++) powB[i] = powB[i - 1] * b;
+  for (let i = z - 1; i >= 0; i--) powB[i] = powB[i + 1] * ib;
   let g = 0, gp = 0, gpp = 0, gt = 0, gtt = 0, gpt = 0;
   for (let i = 0; i < k.n.length; i++) {
     const I = k.I[i], J = k.J[i];
-    const term = k.n[i] * Math.pow(a, I) * Math.pow(b, J);
+    const term = k.n[i] * powA[I] * powB[J + z];
     g += term;
     gp -= term * I * ia;
     gpp += term * I * (I - 1) * ia * ia;

@@ -8,7 +8,7 @@
 import fc from "fast-check";
 import { assert } from "../_assert.ts";
 import { NoPhysicalAnswerError } from "../../lib/errors.ts";
-import { type LiquidState, liquidProperties, liquids, seawater } from "../../lib/liquids/mod.ts";
+import { liquidProperties, liquids, type LiquidState, seawater } from "../../lib/liquids/mod.ts";
 import { outcome, RUNS, Tally } from "./_check.ts";
 
 const ALL = liquids();
@@ -53,8 +53,9 @@ Deno.test("liquids property: every liquid over its range gives finite positive p
   const okBy = new Map<string, number>();
   fc.assert(
     fc.property(state, ([l, T, p]) => {
-      const o = tally.add(outcome(`liquidProperties(${l.id}, ${T}, ${p})`, () =>
-        liquidProperties(l.id, T, p)));
+      const o = tally.add(
+        outcome(`liquidProperties(${l.id}, ${T}, ${p})`, () => liquidProperties(l.id, T, p)),
+      );
       if (o.ok) {
         check(o.value);
         okBy.set(l.id, (okBy.get(l.id) ?? 0) + 1);
@@ -126,8 +127,12 @@ Deno.test("liquids property: seawater over S 0–40, 0–40 °C, 0.1–10 MPa, t
       fc.double({ min: 101325, max: 10e6, noNaN: true }),
       (f, S1, dS, T, p) => {
         const S2 = Math.min(S1 + dS, 40);
-        const a = tally.add(outcome(`seawater(${S1}, ${T}, ${p}, ${f})`, () =>
-          liquidProperties("seawater", T, p, { salinity: S1, formulation: f })));
+        const a = tally.add(
+          outcome(
+            `seawater(${S1}, ${T}, ${p}, ${f})`,
+            () => liquidProperties("seawater", T, p, { salinity: S1, formulation: f }),
+          ),
+        );
         if (!a.ok) throw new Error(`seawater in range refused: ${a.error.message}`);
         check(a.value);
         const c2 = seawater.soundSpeed(S2, T, p, f as "teos10");
@@ -147,7 +152,15 @@ Deno.test("liquids property: any id, temperature, pressure, salinity: a result o
   const tally = new Tally();
   const id = fc.oneof(
     fc.constantFrom(...ALL.map((l) => l.id)),
-    fc.constantFrom("__proto__", "constructor", "toString", "hasOwnProperty", "", "Water", " water"),
+    fc.constantFrom(
+      "__proto__",
+      "constructor",
+      "toString",
+      "hasOwnProperty",
+      "",
+      "Water",
+      " water",
+    ),
     fc.string({ maxLength: 12 }),
   );
   const num = fc.oneof(fc.double(), { arbitrary: fc.double({ min: 150, max: 700 }), weight: 3 });
@@ -171,8 +184,12 @@ Deno.test("liquids property: any id, temperature, pressure, salinity: a result o
           ...(S === null ? {} : { salinity: S }),
           ...(f === null ? {} : { formulation: f }),
         };
-        const o = tally.add(outcome(`liquidProperties(${JSON.stringify(l)}, ${T}, ${p}, …)`, () =>
-          liquidProperties(l, T, p, opts)));
+        const o = tally.add(
+          outcome(
+            `liquidProperties(${JSON.stringify(l)}, ${T}, ${p}, …)`,
+            () => liquidProperties(l, T, p, opts),
+          ),
+        );
         if (o.ok) check(o.value);
       },
     ),

@@ -54,8 +54,10 @@ Deno.test("units property: value × unit reads to SI and writes back through toU
     fc.property(writable, moderate, ({ d, u }, x) => {
       // A temperature below absolute zero is still read (the reader's limits refuse it later).
       const text = `${x} ${u}`;
-      const o = outcome(`parseQuantity(${JSON.stringify(text)}, ${d})`, () =>
-        parseQuantity(text, d, "field"));
+      const o = outcome(
+        `parseQuantity(${JSON.stringify(text)}, ${d})`,
+        () => parseQuantity(text, d, "field"),
+      );
       if (!o.ok) throw new Error(`${text} (${d}) refused: ${o.error.message}`);
       const back = toUnit(o.value, u, 17);
       if (d === "temperature" && TEMPERATURE_UNITS.has(u)) {
@@ -105,8 +107,12 @@ Deno.test("units property: any double with any unit gives a finite value or a Un
   fc.assert(
     fc.property(asked, anyDouble, ({ d, u }, x) => {
       const text = `${x} ${u}`;
-      const o = tally.add(outcome(`parseQuantity(${JSON.stringify(text)}, ${d})`, () =>
-        parseQuantity(text, d, "field")));
+      const o = tally.add(
+        outcome(
+          `parseQuantity(${JSON.stringify(text)}, ${d})`,
+          () => parseQuantity(text, d, "field"),
+        ),
+      );
       if (!o.ok && !(o.error instanceof UnitError)) {
         throw new Error(`${text}: ${o.error.name} instead of UnitError`);
       }
@@ -201,8 +207,9 @@ Deno.test("units property: random and mangled text gives a finite value or a Uni
   );
   fc.assert(
     fc.property(fc.constantFrom(...DIMENSIONS), text, (d, t) => {
-      const o = tally.add(outcome(`parseQuantity(${JSON.stringify(t)}, ${d})`, () =>
-        parseQuantity(t, d, "field")));
+      const o = tally.add(
+        outcome(`parseQuantity(${JSON.stringify(t)}, ${d})`, () => parseQuantity(t, d, "field")),
+      );
       if (!o.ok && !(o.error instanceof UnitError)) {
         throw new Error(`${JSON.stringify(t)}: ${o.error.name} instead of UnitError`);
       }
@@ -216,8 +223,10 @@ Deno.test("units property: random and mangled text gives a finite value or a Uni
 Deno.test("units property: values that are not text give a UnitError (ratios may be numbers)", () => {
   fc.assert(
     fc.property(fc.constantFrom(...DIMENSIONS), fc.anything(), (d, v) => {
-      const o = outcome(`parseQuantity(${typeof v}, ${d})`, () =>
-        parseQuantity(v as string, d, "field"));
+      const o = outcome(
+        `parseQuantity(${typeof v}, ${d})`,
+        () => parseQuantity(v as string, d, "field"),
+      );
       if (typeof v === "string") return;
       if (o.ok) {
         assert.ok(d === "ratio" && typeof v === "number", `accepted ${String(v)} for ${d}`);
