@@ -54,21 +54,34 @@ function median(xs: number[]): number {
   return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
 }
 
-/** Time `fn` over `n` states, `repeats` times after a warm-up; median ns per state. */
-function timeOurs(n: number, repeats: number, minMs: number, fn: () => void): number {
+/**
+ * Alternate our timed loop and one timed reference run, `repeats` times, so that both sides see
+ * the same load; medians in ns per state. Our loop is warmed up first and repeated until it has
+ * run at least `minMs` per repeat.
+ */
+async function interleaved<R extends { time: number }>(
+  n: number,
+  repeats: number,
+  minMs: number,
+  fn: () => void,
+  reference: () => Promise<R>,
+): Promise<{ oursNs: number; theirsNs: number; last: R }> {
   const start = performance.now();
   let passes = 0;
   do {
     fn();
     passes++;
   } while (performance.now() - start < minMs);
-  const per: number[] = [];
+  const ours: number[] = [], theirs: number[] = [];
+  let last: R | undefined;
   for (let r = 0; r < repeats; r++) {
     const t0 = performance.now();
     for (let k = 0; k < passes; k++) fn();
-    per.push((performance.now() - t0) * 1e6 / (passes * n));
+    ours.push((performance.now() - t0) * 1e6 / (passes * n));
+    last = await reference();
+    theirs.push(last.time * 1e9 / n);
   }
-  return median(per);
+  return { oursNs: median(ours), theirsNs: median(theirs), last: last! };
 }
 
 function hasModules(mods: string[]): boolean {
@@ -115,12 +128,10 @@ from iapws import IAPWS95, IAPWS97
 d = json.load(sys.stdin)
 cls = IAPWS95 if d["which"] == "95" else IAPWS97
 T, P = d["T"], [p / 1e6 for p in d["p"]]
-times, w = [], []
-for r in range(d["repeats"]):
-    t0 = time.perf_counter()
-    w = [cls(T=T[i], P=P[i]).w for i in range(len(T))]
-    times.append(time.perf_counter() - t0)
-print(json.dumps({"times": times, "w": w}))
+cls(T=T[0], P=P[0]).w
+t0 = time.perf_counter()
+w = [cls(T=T[i], P=P[i]).w for i in range(len(T))]
+print(json.dumps({"time": time.perf_counter() - t0, "w": w}))
 `;
 
 const PY_GSW = `
@@ -134,13 +145,11 @@ fns = {
 }
 f = fns[d["which"]]
 f()
-times = []
-for r in range(d["repeats"]):
-    t0 = time.perf_counter()
-    c = f()
-    times.append(time.perf_counter() - t0)
+t0 = time.perf_counter()
+c = f()
+elapsed = time.perf_counter() - t0
 idx = np.linspace(0, len(SA) - 1, 2000).astype(int)
-print(json.dumps({"times": times, "c": c[idx].tolist(), "idx": idx.tolist()}))
+print(json.dumps({"time": elapsed, "c": c[idx].tolist(), "idx": idx.tolist()}))
 `;
 
 function worstRel(ours: ArrayLike<number>, theirs: ArrayLike<number>): number {
@@ -164,14 +173,14 @@ async function compareWater(
   const run = () => {
     for (let i = 0; i < n; i++) ours[i] = water.soundSpeed(T[i], P[i], form);
   };
-  const oursNs = timeOurs(n, repeats, 200, run);
-  const ref = await python<{ times: number[]; w: number[] }>(PY_IAPWS, {
-    which,
-    T: Array.from(T),
-    p: Array.from(P),
+  const input = { which, T: Array.from(T), p: Array.from(P) };
+  const { oursNs, theirsNs, last: ref } = await interleaved(
+    n,
     repeats,
-  });
-  const theirsNs = median(ref.times) * 1e9 / n;
+    200,
+    run,
+    () => python<{ time: number; w: number[] }>(PY_IAPWS, input),
+  );
   const speedup = theirsNs / oursNs;
   const goal = which === "95" ? 300 : 100;
   return {
@@ -206,15 +215,19 @@ async function compareSeawater(
   const run = () => {
     for (let i = 0; i < n; i++) ours[i] = seawater.soundSpeed(S[i], T[i], P[i], which);
   };
-  const oursNs = timeOurs(n, repeats, 300, run);
-  const ref = await python<{ times: number[]; c: number[]; idx: number[] }>(PY_GSW, {
+  const input = {
     which,
     SA: Array.from(S, (s) => s * 35.16504 / 35),
     t: Array.from(t),
     p: Array.from(pd),
+  };
+  const { oursNs, theirsNs, last: ref } = await interleaved(
+    n,
     repeats,
-  });
-  const theirsNs = median(ref.times) * 1e9 / n;
+    300,
+    run,
+    () => python<{ time: number; c: number[]; idx: number[] }>(PY_GSW, input),
+  );
   const speedup = theirsNs / oursNs;
   return {
     name: `TEOS-10 ${
@@ -272,7 +285,9 @@ runMain(async () => {
   }
   for (const s of skipped) console.log(`notice: ${s}`);
   if (rows.length === 0) return 0;
-  console.log(`medians of ${repeats} repeats, per state; ratio = reference time / our time\n`);
+  console.log(
+    `medians of ${repeats} interleaved repeats, per state; ratio = reference time / our time\n`,
+  );
   for (const r of rows) {
     console.log(
       `${r.name}\n  ours ${fmtNs(r.oursNs)}   ${r.reference}: ${fmtNs(r.theirsNs)}   ` +

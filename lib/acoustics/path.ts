@@ -308,6 +308,9 @@ export function validateClampOnInputs(p: ClampOnInputs): readonly LiningLayer[] 
     throw new InputError("lining.thickness", `${sum} m in total`, `less than the inside radius`);
   }
   if (p.wedge !== undefined) {
+    if (p.wedge === null || typeof p.wedge !== "object") {
+      throw new InputError("wedge", String(p.wedge), "{ elementHeight?, indexOffset? } (m)");
+    }
     const h = p.wedge.elementHeight;
     if (h !== undefined && (typeof h !== "number" || !Number.isFinite(h) || h < 0)) {
       throw new InputError("wedge.elementHeight", String(h), "a length of 0 m or more");
@@ -515,7 +518,29 @@ export function clampOnPath(inputs: ClampOnInputs): ClampOnPath {
     wallSoundSpeed: cL,
     lining: layers,
   };
+  if (!finitePath(out)) {
+    // Sizes and speeds each finite and positive can still overflow or divide to ±Infinity
+    // (a speed of 1e-320 m/s, a diameter of 1e308 m): refuse rather than return them.
+    throw new InputError(
+      "inputs",
+      "sizes and speeds whose path times or spacing are not finite numbers",
+      "the sizes (m) and sound speeds (m/s) of a real mounting",
+    );
+  }
   return out;
+}
+
+function finitePath(p: ClampOnPath): boolean {
+  const f = Number.isFinite;
+  if (
+    !f(p.spacing) || !f(p.fluidPathLength) || !f(p.fluidTime) || !f(p.wallTime) ||
+    !f(p.liningTime) || !f(p.totalTime) || !f(p.wedgeTime ?? 0) ||
+    !f(p.elementSpacing ?? 0) || !f(p.referenceMarkDistance ?? 0)
+  ) return false;
+  for (const m of p.modes) {
+    if (m.reachesLiquid && (!f(m.spacing!) || !f(m.wallTime!) || !f(m.totalTime!))) return false;
+  }
+  return true;
 }
 
 function wallModePath(

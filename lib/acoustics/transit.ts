@@ -94,7 +94,7 @@ export function transitTimes(path: TransitPath, velocity: number): TransitTimes 
   const tf = fixedTime(path);
   const upstream = tf + L / (c - vs);
   const downstream = tf + L / (c + vs);
-  return {
+  const out = {
     velocity,
     upstream,
     downstream,
@@ -103,6 +103,16 @@ export function transitTimes(path: TransitPath, velocity: number): TransitTimes 
     meanTime: 0.5 * (upstream + downstream),
     fixedTime: tf,
   };
+  const fin = Number.isFinite;
+  if (!fin(out.deltaT) || !fin(out.deltaTLinear) || !fin(out.meanTime) || !fin(tf)) {
+    // Finite inputs can still overflow (a path of 1e308 m): refuse rather than return ±Infinity.
+    throw new InputError(
+      "path",
+      `a path whose times overflow (liquid path ${L} m, fixed time ${tf} s)`,
+      "a path from clampOnPath() of a real mounting",
+    );
+  }
+  return out;
 }
 
 /** Relative sensitivity coefficients ∂v/∂x · x/v of a velocity form. */
@@ -146,6 +156,7 @@ export interface PathVelocity {
  * @param downstream measured downstream transit time, s
  * @returns the velocity (exact) and both forms with their sensitivities
  * @throws {InputError} on non-finite times, or times not longer than the fixed time
+ * @throws {NoPhysicalAnswerError} when the beam is too near normal incidence for any form
  *
  * Source: derived from {@link transitTimes}; GUM sensitivity coefficients (jcgm-100-2008).
  *
@@ -194,6 +205,15 @@ export function pathVelocity(
   const tanf = sinf / cosf;
   const vc = c * c * dt / (2 * path.traverses * path.boreDiameter * tanf);
   const sec2 = 1 / (cosf * cosf);
+  const fin = Number.isFinite;
+  if (!fin(v) || !fin(vi) || !fin(vc) || !fin(sec2) || !fin(aw * cotw)) {
+    // A beam at (or within rounding of) normal incidence carries no axial component: the
+    // forms divide 0 by 0 instead of giving a velocity.
+    throw new NoPhysicalAnswerError(
+      `no velocity from transit times: the beam (${path.fluidAngle} rad in the liquid, ` +
+        `${aw} rad in the wedge) is too near normal incidence to carry the axial flow`,
+    );
+  }
   return {
     velocity: v,
     liquidTimes: { upstream: tu, downstream: td },

@@ -44,8 +44,11 @@ const G = new Float64Array(6);
 let powA = new Float64Array(0);
 let powB = new Float64Array(0);
 let jMin = 0;
+// Exponents as integers and the coefficients times the factors of each derivative.
+let I = new Int32Array(0), J = new Int32Array(0);
+let nI = new Float64Array(0), nII = nI, nJ = nI, nJJ = nI, nIJ = nI;
 
-function sizeTables(k: { I: ArrayLike<number>; J: ArrayLike<number> }): void {
+function sizeTables(k: { I: ArrayLike<number>; J: ArrayLike<number>; n: Float64Array }): void {
   let iMax = 0, jLo = 0, jHi = 0;
   for (let i = 0; i < k.I.length; i++) {
     iMax = Math.max(iMax, k.I[i]);
@@ -55,6 +58,15 @@ function sizeTables(k: { I: ArrayLike<number>; J: ArrayLike<number> }): void {
   powA = new Float64Array(iMax + 1);
   powB = new Float64Array(jHi - jLo + 1);
   jMin = jLo;
+  I = Int32Array.from(k.I);
+  J = Int32Array.from(k.J);
+  const n = (f: (c: number, i: number, j: number) => number) =>
+    Float64Array.from(k.n, (c, m) => f(c, k.I[m], k.J[m]));
+  nI = n((c, i) => c * i);
+  nII = n((c, i) => c * i * (i - 1));
+  nJ = n((c, _i, j) => c * j);
+  nJJ = n((c, _i, j) => c * j * (j - 1));
+  nIJ = n((c, i, j) => c * i * j);
 }
 
 function gibbs(pi: number, tau: number): void {
@@ -70,17 +82,22 @@ function gibbs(pi: number, tau: number): void {
   powB[z] = 1;
   for (let i = z + 1; i < powB.length; i++) powB[i] = powB[i - 1] * b;
   for (let i = z - 1; i >= 0; i--) powB[i] = powB[i + 1] * ib;
+  // Sums of n·I^…·J^…·a^I·b^J; the 1/a and 1/b factors of the derivatives are applied after.
   let g = 0, gp = 0, gpp = 0, gt = 0, gtt = 0, gpt = 0;
   for (let i = 0; i < k.n.length; i++) {
-    const I = k.I[i], J = k.J[i];
-    const term = k.n[i] * powA[I] * powB[J + z];
-    g += term;
-    gp -= term * I * ia;
-    gpp += term * I * (I - 1) * ia * ia;
-    gt += term * J * ib;
-    gtt += term * J * (J - 1) * ib * ib;
-    gpt -= term * I * J * ia * ib;
+    const ab = powA[I[i]] * powB[J[i] + z];
+    g += k.n[i] * ab;
+    gp += nI[i] * ab;
+    gpp += nII[i] * ab;
+    gt += nJ[i] * ab;
+    gtt += nJJ[i] * ab;
+    gpt += nIJ[i] * ab;
   }
+  gp *= -ia;
+  gpp *= ia * ia;
+  gt *= ib;
+  gtt *= ib * ib;
+  gpt *= -ia * ib;
   G[0] = g;
   G[1] = gp;
   G[2] = gpp;

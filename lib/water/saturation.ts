@@ -46,6 +46,20 @@ export function saturationPressureUnchecked(T: number): number {
   return c.pc * Math.exp((c.Tc / T) * sum);
 }
 
+// p_s at whole kelvins above the triple point (filled on first use), for the fast pass.
+let bounds: Float64Array | undefined;
+
+function saturationBound(T: number): number {
+  if (!bounds) {
+    const n = Math.ceil(SATURATION_RANGE[1] - SATURATION_RANGE[0]) + 1;
+    bounds = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+      bounds[i] = saturationPressureUnchecked(Math.min(SATURATION_RANGE[0] + i, 647.096));
+    }
+  }
+  return bounds[Math.ceil(T - SATURATION_RANGE[0])];
+}
+
 /**
  * Refuse a (T, p) where water is not liquid (p below the saturation pressure at T).
  *
@@ -61,6 +75,9 @@ export function assertLiquid(T: number, p: number): void {
     );
   }
   if (T < SATURATION_RANGE[0]) return;
+  // Fast pass: p_s(T) rises with T, so p at or above p_s at the next whole kelvin is liquid.
+  const bound = saturationBound(T);
+  if (p >= bound) return;
   const ps = saturationPressureUnchecked(T);
   if (p < ps) {
     throw new NoPhysicalAnswerError(
