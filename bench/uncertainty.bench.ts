@@ -3,6 +3,7 @@
  * with mixed distributions), and the GUM propagation of the same model for comparison.
  */
 import { gumPropagate, monteCarlo, type UncertainInput } from "../lib/uncertainty/mod.ts";
+import { flowModel } from "../lib/site/model.ts";
 
 const DISTS: UncertainInput["distribution"][] = ["normal", "rectangular", "triangular", "u-shaped"];
 const inputs: UncertainInput[] = Array.from({ length: 10 }, (_, i) => ({
@@ -24,4 +25,27 @@ Deno.bench("monteCarlo, 1e5 draws, 10 inputs, shortest interval", { group: "unce
 
 Deno.bench("gumPropagate, 10 inputs", { group: "uncertainty" }, () => {
   gumPropagate(model, inputs);
+});
+
+// The plan's own measurement model (lib/site/model.ts, 9 inputs), 10⁵ draws: an invented 8-inch
+// steel line at about 60 L/s; uncertainties of the size a plan carries.
+const FLOW_INPUTS: UncertainInput[] = [
+  ["outsideDiameter", 0.2191, 0.0005, "rectangular"],
+  ["wallThickness", 0.00818, 0.0003, "rectangular"],
+  ["liningThickness", 0, 0.0001, "rectangular"],
+  ["wedgeSoundSpeed", 2720, 10, "normal"],
+  ["wedgeAngle", 38 * Math.PI / 180, 0.002, "normal"],
+  ["deltaT", 1.2e-7, 1e-9, "normal"],
+  ["liquidTime", 1.5e-4, 2e-7, "normal"],
+  ["profileFactor", 0.94, 0.005, "rectangular"],
+  ["installationEffect", 0, 0.005, "triangular"],
+].map(([name, value, u, d]) => ({
+  name: name as string,
+  value: value as number,
+  standardUncertainty: u as number,
+  distribution: d as UncertainInput["distribution"],
+}));
+
+Deno.bench("monteCarlo, 1e5 draws, flowModel (9 inputs)", { group: "flow model" }, () => {
+  monteCarlo(flowModel, FLOW_INPUTS, { draws: 100_000, seed: 1 });
 });

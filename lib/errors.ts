@@ -278,7 +278,7 @@ export function checkRange(
   options?: ValidityOptions,
 ): void {
   if (!Number.isFinite(value)) {
-    throw new InputError(quantity, String(value), `a finite number in ${unit}`);
+    throw new InputError(quantity, show(value), `a finite number in ${unit}`);
   }
   if (value >= range[0] && value <= range[1]) return;
   const err = new OutOfRangeError(quantity, value, range, unit, formulation);
@@ -310,11 +310,20 @@ export function requireFinite(
   if (typeof value !== "number" || !Number.isFinite(value) || (positive && !(value > 0))) {
     throw new InputError(
       field,
-      String(value),
+      show(value),
       positive ? `a finite number greater than 0 (${unit})` : `a finite number (${unit})`,
     );
   }
   return value;
+}
+
+/** String(v), or a plain description when v's own toString is broken (`{ toString: 1 }`). */
+function show(v: unknown): string {
+  try {
+    return String(v);
+  } catch {
+    return Array.isArray(v) ? "a list" : `a value of type ${typeof v}`;
+  }
 }
 
 function fmt(x: number): string {

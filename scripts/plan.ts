@@ -60,7 +60,13 @@ examples:
 
 const FORMATS = ["text", "json", "md", "html", "csv"] as const;
 type Format = typeof FORMATS[number];
-const EXT: Record<Format, string> = { text: "txt", json: "json", md: "md", html: "html", csv: "csv" };
+const EXT: Record<Format, string> = {
+  text: "txt",
+  json: "json",
+  md: "md",
+  html: "html",
+  csv: "csv",
+};
 
 /** Write a file atomically: a temporary file in the same folder, then rename. */
 async function writeAtomic(path: string, text: string): Promise<void> {
@@ -78,7 +84,10 @@ async function writeAtomic(path: string, text: string): Promise<void> {
 }
 
 function safeName(s: string): string {
-  return s.normalize("NFKD").replace(/[^A-Za-z0-9._-]+/g, "-").replace(/^-+|-+$/g, "").slice(0, 80) ||
+  return s.normalize("NFKD").replace(/[^A-Za-z0-9._-]+/g, "-").replace(/^-+|-+$/g, "").slice(
+    0,
+    80,
+  ) ||
     "site";
 }
 
@@ -89,29 +98,45 @@ async function readReadings(path: string): Promise<FieldReadings> {
   try {
     raw = parseYaml(text, { maxAliasCount: 10, uniqueKeys: true });
   } catch (e) {
-    throw new InputError(path, `invalid YAML (${(e as Error).message.split("\n")[0]})`, "a YAML readings file");
+    throw new InputError(
+      path,
+      `invalid YAML (${(e as Error).message.split("\n")[0]})`,
+      "a YAML readings file",
+    );
   }
   // deno-lint-ignore no-explicit-any
   const r = (raw as any)?.readings ?? raw;
-  if (!r || typeof r !== "object") throw new InputError(`${path}: readings`, "nothing", "a readings object");
+  if (!r || typeof r !== "object") {
+    throw new InputError(`${path}: readings`, "nothing", "a readings object");
+  }
   const allowed = ["temperature", "wallThickness", "mountings"];
   for (const k of Object.keys(r)) {
-    if (!allowed.includes(k)) throw new InputError(`readings.${k}`, "an unknown key", allowed.join(", "));
+    if (!allowed.includes(k)) {
+      throw new InputError(`readings.${k}`, "an unknown key", allowed.join(", "));
+    }
   }
   const mountings = [];
-  if (!Array.isArray(r.mountings)) throw new InputError("readings.mountings", "nothing", "a list of mountings");
+  if (!Array.isArray(r.mountings)) {
+    throw new InputError("readings.mountings", "nothing", "a list of mountings");
+  }
   for (const [i, m] of r.mountings.entries()) {
     const f = `readings.mountings[${i}]`;
     const keys = ["traverses", "totalTime", "fixedDelay", "deltaT", "indicatedVelocity"];
     for (const k of Object.keys(m ?? {})) {
       if (!keys.includes(k)) throw new InputError(`${f}.${k}`, "an unknown key", keys.join(", "));
     }
-    if (!Number.isInteger(m.traverses)) throw new InputError(`${f}.traverses`, String(m.traverses), "an integer 1–8");
+    if (!Number.isInteger(m.traverses)) {
+      throw new InputError(`${f}.traverses`, String(m.traverses), "an integer 1–8");
+    }
     mountings.push({
       traverses: m.traverses,
       totalTime: await parseQuantityFull(m.totalTime, "time", `${f}.totalTime`),
-      fixedDelay: m.fixedDelay === undefined ? undefined : await parseQuantityFull(m.fixedDelay, "time", `${f}.fixedDelay`),
-      deltaT: m.deltaT === undefined ? undefined : await parseQuantityFull(m.deltaT, "time", `${f}.deltaT`),
+      fixedDelay: m.fixedDelay === undefined
+        ? undefined
+        : await parseQuantityFull(m.fixedDelay, "time", `${f}.fixedDelay`),
+      deltaT: m.deltaT === undefined
+        ? undefined
+        : await parseQuantityFull(m.deltaT, "time", `${f}.deltaT`),
       indicatedVelocity: m.indicatedVelocity === undefined
         ? undefined
         : await parseQuantityFull(m.indicatedVelocity, "speed", `${f}.indicatedVelocity`),
@@ -147,7 +172,11 @@ async function main(): Promise<number> {
     throw new InputError("--format", JSON.stringify(values.format), FORMATS.join(", "));
   }
   if (positionals.length === 0) {
-    throw new InputError("arguments", "no site file", "one or more site files, folders or CSV files");
+    throw new InputError(
+      "arguments",
+      "no site file",
+      "one or more site files, folders or CSV files",
+    );
   }
   const intOpt = (name: string, dflt: number, min: number, max: number) => {
     const v = values[name];
@@ -175,11 +204,18 @@ async function main(): Promise<number> {
     } catch {
       throw new InputError("site file", JSON.stringify(p), "an existing file or folder");
     }
-    if (info.isDirectory) for (const f of await siteFiles(p)) sources.push({ kind: "file", path: f });
-    else if (/\.csv$/i.test(p)) sources.push({ kind: "csv", path: p });
+    if (info.isDirectory) {
+      for (const f of await siteFiles(p)) sources.push({ kind: "file", path: f });
+    } else if (/\.csv$/i.test(p)) sources.push({ kind: "csv", path: p });
     else sources.push({ kind: "file", path: p });
   }
-  if (sources.length === 0) throw new InputError("site files", positionals.join(" "), "a folder holding .yaml, .yml or .json site files");
+  if (sources.length === 0) {
+    throw new InputError(
+      "site files",
+      positionals.join(" "),
+      "a folder holding .yaml, .yml or .json site files",
+    );
+  }
 
   // reconciliation mode
   if (values.readings !== undefined) {
@@ -202,7 +238,9 @@ async function main(): Promise<number> {
   const outIsDir = out !== undefined && !outIsFile;
   const quiet = Boolean(values.quiet);
 
-  const summary: ({ row: (string | number)[]; href: string } | { id: string; name: string; error: string })[] = [];
+  const summary:
+    ({ row: (string | number)[]; href: string } | { id: string; name: string; error: string })[] =
+      [];
   let refused = 0;
   let worstCode = 0;
   let count = 0;
@@ -232,7 +270,11 @@ async function main(): Promise<number> {
       if (!(e instanceof SnellpathError)) throw e;
       refused++;
       worstCode = Math.max(worstCode, e.exitCode);
-      console.error(`error: ${site.source.file}${site.source.row ? ` row ${site.source.row}` : ""}: ${e.message}`);
+      console.error(
+        `error: ${site.source.file}${
+          site.source.row ? ` row ${site.source.row}` : ""
+        }: ${e.message}`,
+      );
       summary.push({ id: site.id ?? label, name: site.name, error: e.message });
       return;
     }
@@ -260,7 +302,13 @@ async function main(): Promise<number> {
   for (const src of sources) {
     if (src.kind === "csv") {
       const { sites, errors } = await readSitesCsvFile(src.path);
-      for (const e of errors) await handle(undefined, `${src.path} row ${e.row}`, new InputError(`row ${e.row}`, "", e.message));
+      for (const e of errors) {
+        await handle(
+          undefined,
+          `${src.path} row ${e.row}`,
+          new InputError(`row ${e.row}`, "", e.message),
+        );
+      }
       for (const s of sites) {
         await handle(s, `${src.path} row ${s.source.row}`);
         progress(sites.length + errors.length);
@@ -287,7 +335,9 @@ async function main(): Promise<number> {
       if (!quiet) {
         const secs = (performance.now() - started) / 1000;
         console.error(
-          `planned ${count - refused} of ${count} sites in ${secs.toFixed(2)} s; reports in ${out}/` +
+          `planned ${count - refused} of ${count} sites in ${
+            secs.toFixed(2)
+          } s; reports in ${out}/` +
             (format === "html" || format === "csv" ? " (open index.html)" : ""),
         );
       }

@@ -4,7 +4,13 @@
  *
  * @module
  */
-import { checkRange, InputError, requireFinite, type ValidityOptions } from "../errors.ts";
+import {
+  checkRange,
+  InputError,
+  NoPhysicalAnswerError,
+  requireFinite,
+  type ValidityOptions,
+} from "../errors.ts";
 import { flowConstants } from "./constants.ts";
 
 /** Methods accepted by {@link frictionFactor}. */
@@ -85,7 +91,14 @@ export function frictionFactor(
     "Colebrook–White",
     options,
   );
-  if (reynolds < c.laminarLimit) return 64 / reynolds;
+  if (reynolds < c.laminarLimit) {
+    const f = 64 / reynolds;
+    // A denormal Re (5e-324) is positive and finite but 64/Re overflows.
+    if (!Number.isFinite(f)) {
+      throw new InputError("reynolds", String(reynolds), "a Reynolds number above 1e-300");
+    }
+    return f;
+  }
   if (reynolds < c.colebrookLimit) {
     options?.warnings?.push({
       code: "transition",
@@ -101,6 +114,17 @@ export function frictionFactor(
 }
 
 function turbulent(re: number, rr: number, method: FrictionMethod): number {
+  const f = turbulentForm(re, rr, method);
+  // Only reachable when extrapolating far out (ε/D of 1e278): the forms give NaN or ±Infinity.
+  if (!(Number.isFinite(f) && f > 0)) {
+    throw new NoPhysicalAnswerError(
+      `${method} gives no finite friction factor at Re ${re}, relative roughness ${rr}`,
+    );
+  }
+  return f;
+}
+
+function turbulentForm(re: number, rr: number, method: FrictionMethod): number {
   switch (method) {
     case "colebrook":
       return colebrook(re, rr);

@@ -3,6 +3,7 @@
  *
  * @module
  */
+import { InputError } from "../errors.ts";
 import { defaultRegistry } from "../registry/mod.ts";
 import type { Fitting } from "../registry/schemas/fittings.ts";
 
@@ -15,7 +16,8 @@ export type {
 
 /**
  * A fitting by id or alias from data/fittings.yaml, or the entry itself when given one.
- * Throws NotFoundError listing the nearest ids for an unknown id.
+ * Throws NotFoundError listing the nearest ids for an unknown id, InputError for a value that
+ * is neither an id nor a fitting entry.
  *
  * @param fitting id (`elbow-90`, `pump`, …), alias (`straight`) or a fitting entry
  * @returns the fitting entry
@@ -27,5 +29,16 @@ export type {
  * ```
  */
 export function resolveFitting(fitting: string | Fitting): Fitting {
-  return typeof fitting === "string" ? defaultRegistry().fitting(fitting) : fitting;
+  if (typeof fitting === "string") return defaultRegistry().fitting(fitting);
+  if (
+    fitting === null || typeof fitting !== "object" || typeof fitting.id !== "string" ||
+    !fitting.straightRun || !fitting.disturbance
+  ) {
+    throw new InputError(
+      "fitting",
+      fitting === null || typeof fitting !== "object" ? String(fitting) : "an object",
+      "a fitting id such as elbow-90 or pump, or a fitting entry of the registry",
+    );
+  }
+  return fitting;
 }

@@ -27,7 +27,7 @@
  *
  * @module
  */
-import { InputError, requireFinite } from "../errors.ts";
+import { InputError, NoPhysicalAnswerError, requireFinite } from "../errors.ts";
 import { halfChordRule } from "../flow/quadrature.ts";
 import {
   chordMeanVelocity,
@@ -149,7 +149,8 @@ export function profileErrorEstimate(input: ProfileErrorInput): ProfileErrorResu
   const h = requireFinite("chordOffset", input.chordOffset ?? 0, "1");
   if (h < 0 || h >= 1) throw new InputError("chordOffset", String(h), "h/R from 0 up to 1");
   const phi = requireFinite("fluidAngle", input.fluidAngle ?? DEFAULT_FLUID_ANGLE, "rad");
-  if (!(phi > 0 && phi < 1.4)) {
+  // A denormal angle passes phi > 0 but its cot φ overflows: refuse it with the rest.
+  if (!(phi > 0 && phi < 1.4) || !Number.isFinite(1 / Math.tan(phi))) {
     throw new InputError("fluidAngle", String(phi), "a beam angle in the liquid in (0, 1.4) rad");
   }
   const shape: ProfileShape = profileShape(re, {
@@ -168,6 +169,11 @@ export function profileErrorEstimate(input: ProfileErrorInput): ProfileErrorResu
   });
   const error = components.axisymmetric + components.secondHarmonic + components.skew +
     components.swirl + components.crossFlow;
+  if (!Number.isFinite(error)) {
+    throw new NoPhysicalAnswerError(
+      `the distorted-profile model gives no finite estimate at ${x0} D, beam ${phi} rad`,
+    );
+  }
   return Object.freeze({
     error,
     spread: MODEL_RELATIVE_SPREAD * Math.abs(error),

@@ -88,6 +88,10 @@ export function checkStraightRun(input: StraightRunInput): StraightRunResult {
   const reqDown = down ? down.straightRun.downstream.diameters : 0;
   const upD = upDist / d;
   const downD = downDist === null ? null : downDist / d;
+  if (!Number.isFinite(upD) || (downD !== null && !Number.isFinite(downD))) {
+    // A denormal diameter (5e-324 m) is positive and finite, but distance/diameter overflows.
+    throw new InputError("diameter", `${d} m`, "an inside diameter of a real pipe (m)");
+  }
   const reasons: string[] = [];
   const side = (have: number, need: number, label: string, id: string): StraightRunVerdict => {
     if (have >= need) {

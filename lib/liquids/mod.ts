@@ -24,6 +24,7 @@ export {
   seawater,
   type SeawaterFormulation,
   seawaterFormulations,
+  type SeawaterNamespace,
   seawaterTrace,
   soundSpeed75 as seawaterSoundSpeed75,
   specificVolume75 as seawaterSpecificVolume75,

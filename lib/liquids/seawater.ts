@@ -392,6 +392,35 @@ export const seawaterFormulations: Readonly<Record<SeawaterFormulation, readonly
     "unesco1983": ["fofonoff-millard-1983", "chen-millero-1977"],
   });
 
+/** The shape of {@link seawater}: see each function's own documentation there. */
+export interface SeawaterNamespace {
+  /** Sound speed, m/s, from practical salinity, T in K and absolute p in Pa. */
+  readonly soundSpeed: (
+    S: number,
+    T: number,
+    p?: number,
+    formulation?: SeawaterFormulation,
+    options?: ValidityOptions,
+  ) => number;
+  /** Density, kg/m³, from practical salinity, T in K and absolute p in Pa. */
+  readonly density: (
+    S: number,
+    T: number,
+    p?: number,
+    formulation?: "teos10" | "teos10-gibbs",
+    options?: ValidityOptions,
+  ) => number;
+  /** Dynamic viscosity, Pa·s, from practical salinity, T in K and pure-water viscosity. */
+  readonly viscosityFromWater: (
+    S: number,
+    T: number,
+    waterViscosity: number,
+    options?: ValidityOptions,
+  ) => number;
+  /** Formulation names with their source ids. */
+  readonly formulations: Readonly<Record<SeawaterFormulation, readonly string[]>>;
+}
+
 /**
  * Seawater properties: `soundSpeed(S, T, p?, formulation?, options?)`, `density(S, T, p?, …)`,
  * `viscosityFromWater(S, T, μ_w, options?)`, and the formulations list. Salinity is practical
@@ -403,7 +432,7 @@ export const seawaterFormulations: Readonly<Record<SeawaterFormulation, readonly
  * if (!(seawater.soundSpeed(35, 293.15) > 1500)) throw new Error();
  * ```
  */
-export const seawater = Object.freeze({
+export const seawater: SeawaterNamespace = Object.freeze({
   soundSpeed,
   density,
   viscosityFromWater,

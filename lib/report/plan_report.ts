@@ -23,7 +23,7 @@ const pct = (x: number, d = 3) => `${Number((x * 100).toPrecision(d))} %`;
 const mm = (x: number, d = 4) => formatQuantity(x, "mm", d);
 
 /** Safety cautions every plan report carries, besides the plan's own. */
-export const REPORT_SAFETY =
+export const REPORT_SAFETY: string =
   "Safety: work on live, hot or pressurised lines, lifting lagging or insulation, hazardous " +
   "areas, confined spaces and work at height each need the site's permits and trained people. " +
   "Local codes and licensed practice take precedence over this report.";
@@ -31,8 +31,12 @@ export const REPORT_SAFETY =
 function verdictLine(p: SitePlan): string {
   if (!p.target) return "no target uncertainty stated";
   return p.target.reachable
-    ? `target ${pct(p.target.uncertainty)} reachable here: worst expanded ${pct(p.target.worstExpanded)} (${p.target.worstPoint} flow)`
-    : `target ${pct(p.target.uncertainty)} NOT reachable as planned: worst expanded ${pct(p.target.worstExpanded)} (${p.target.worstPoint} flow)`;
+    ? `target ${pct(p.target.uncertainty)} reachable here: worst expanded ${
+      pct(p.target.worstExpanded)
+    } (${p.target.worstPoint} flow)`
+    : `target ${pct(p.target.uncertainty)} NOT reachable as planned: worst expanded ${
+      pct(p.target.worstExpanded)
+    } (${p.target.worstPoint} flow)`;
 }
 
 function mountingRows(p: SitePlan): (string | number)[][] {
@@ -74,7 +78,14 @@ function pointRows(p: SitePlan): (string | number)[][] {
   ]);
 }
 
-const POINT_HEADERS = ["flow", "flow rate", "mean velocity", "Reynolds", "regime", "profile factor"];
+const POINT_HEADERS = [
+  "flow",
+  "flow rate",
+  "mean velocity",
+  "Reynolds",
+  "regime",
+  "profile factor",
+];
 
 function budgetRows(p: SitePlan): (string | number)[][] {
   return p.uncertainty.budget.map((b) => [
@@ -138,9 +149,11 @@ export function planText(p: SitePlan): string {
   out.push(
     `fluid  ${p.fluid.name} at ${formatQuantity(p.fluid.temperature, "degC", 3)}, ${
       formatQuantity(p.fluid.pressure, "bar", 3)
-    } abs: c ${formatQuantity(p.fluid.soundSpeed, "m/s", 5)} (± ${p.fluid.soundSpeedSpread.toFixed(1)}), ρ ${
-      formatQuantity(p.fluid.density, "kg/m^3", 4)
-    }, ν ${formatQuantity(p.fluid.kinematicViscosity, "mm^2/s", 3)}`,
+    } abs: c ${formatQuantity(p.fluid.soundSpeed, "m/s", 5)} (± ${
+      p.fluid.soundSpeedSpread.toFixed(1)
+    }), ρ ${formatQuantity(p.fluid.density, "kg/m^3", 4)}, ν ${
+      formatQuantity(p.fluid.kinematicViscosity, "mm^2/s", 3)
+    }`,
   );
   out.push(
     `wedge  ${formatQuantity(p.transducer.wedgeSoundSpeed, "m/s", 4)} at ${
@@ -150,7 +163,11 @@ export function planText(p: SitePlan): string {
   out.push("");
   out.push(`verdict: ${verdictLine(p)}`);
   for (const s of p.target?.suggestions ?? []) out.push(`  - ${s}`);
-  out.push(`recommended mounting: ${p.mountings.find((m) => m.traverses === p.recommendedMounting)?.name} (${p.recommendedMounting} traverses)`);
+  out.push(
+    `recommended mounting: ${
+      p.mountings.find((m) => m.traverses === p.recommendedMounting)?.name
+    } (${p.recommendedMounting} traverses)`,
+  );
   out.push("");
   out.push(textTable(MOUNTING_HEADERS, mountingRows(p)));
   out.push("");
@@ -160,24 +177,40 @@ export function planText(p: SitePlan): string {
     const r = p.straightRun;
     out.push("");
     out.push(
-      `straight run ${formatQuantity(r.runLength, "m", 3)} from ${r.upstreamFitting} to ${r.downstreamFitting}: ` +
+      `straight run ${
+        formatQuantity(r.runLength, "m", 3)
+      } from ${r.upstreamFitting} to ${r.downstreamFitting}: ` +
         `${r.verdict} at ${formatQuantity(r.position, "m", 3)} (${r.positionSource}); ` +
         `${r.upstreamDiameters.toFixed(1)} D upstream of ${r.requiredUpstream} D required, ` +
-        `${r.downstreamDiameters === null ? "—" : r.downstreamDiameters.toFixed(1)} D downstream of ${r.requiredDownstream} D`,
+        `${
+          r.downstreamDiameters === null ? "—" : r.downstreamDiameters.toFixed(1)
+        } D downstream of ${r.requiredDownstream} D`,
     );
     out.push(
-      `  common-practice position ${formatQuantity(r.commonPracticePosition, "m", 3)}; model-ranked position ` +
-        `${formatQuantity(r.recommendedPosition, "m", 3)} at ${(r.recommendedOrientation * DEG).toFixed(0)}°; ` +
-        `estimated profile error ${pct(r.estimatedProfileError, 2)} ± ${pct(r.estimatedProfileErrorSpread, 2)} (an estimate)`,
+      `  common-practice position ${
+        formatQuantity(r.commonPracticePosition, "m", 3)
+      }; model-ranked position ` +
+        `${formatQuantity(r.recommendedPosition, "m", 3)} at ${
+          (r.recommendedOrientation * DEG).toFixed(0)
+        }°; ` +
+        `estimated profile error ${pct(r.estimatedProfileError, 2)} ± ${
+          pct(r.estimatedProfileErrorSpread, 2)
+        } (an estimate)`,
     );
     out.push(sketchRun(p));
   }
   out.push("");
   out.push(
-    `uncertainty (${p.mountings.find((m) => m.traverses === p.uncertainty.mounting)?.name} mounting, ${p.uncertainty.operatingPoint} flow): ` +
-      `expanded ${pct(p.uncertainty.expanded)} (k = ${p.uncertainty.coverageFactor.toFixed(2)}, GUM)` +
+    `uncertainty (${
+      p.mountings.find((m) => m.traverses === p.uncertainty.mounting)?.name
+    } mounting, ${p.uncertainty.operatingPoint} flow): ` +
+      `expanded ${pct(p.uncertainty.expanded)} (k = ${
+        p.uncertainty.coverageFactor.toFixed(2)
+      }, GUM)` +
       (p.uncertainty.monteCarlo
-        ? `; Monte Carlo ${pct(p.uncertainty.monteCarlo.expanded)} (${p.uncertainty.monteCarlo.draws} draws, 95 %)`
+        ? `; Monte Carlo ${
+          pct(p.uncertainty.monteCarlo.expanded)
+        } (${p.uncertainty.monteCarlo.draws} draws, 95 %)`
         : ""),
   );
   out.push(textTable(BUDGET_HEADERS, budgetRows(p)));
@@ -202,7 +235,9 @@ function sketchRun(p: SitePlan): string {
   const line = Array.from({ length: W }, () => "=");
   line[at(r.commonPracticePosition)] = "c";
   line[at(r.position)] = "M";
-  return `  [${r.upstreamFitting}]${line.join("")}[${r.downstreamFitting}]   M meter, c common-practice position`;
+  return `  [${r.upstreamFitting}]${
+    line.join("")
+  }[${r.downstreamFitting}]   M meter, c common-practice position`;
 }
 
 /**
@@ -237,16 +272,27 @@ export function planMarkdown(p: SitePlan): string {
     const r = p.straightRun;
     out.push(`\n## Straight run\n`);
     out.push(
-      `${r.verdict} at ${formatQuantity(r.position, "m", 3)} (${r.positionSource}); common-practice position ` +
-        `${formatQuantity(r.commonPracticePosition, "m", 3)}, model-ranked ${formatQuantity(r.recommendedPosition, "m", 3)}; ` +
-        `estimated profile error ${pct(r.estimatedProfileError, 2)} (an estimate, not a calibration).`,
+      `${r.verdict} at ${
+        formatQuantity(r.position, "m", 3)
+      } (${r.positionSource}); common-practice position ` +
+        `${formatQuantity(r.commonPracticePosition, "m", 3)}, model-ranked ${
+          formatQuantity(r.recommendedPosition, "m", 3)
+        }; ` +
+        `estimated profile error ${
+          pct(r.estimatedProfileError, 2)
+        } (an estimate, not a calibration).`,
     );
     for (const x of r.reasons) out.push(`- ${x}`);
   }
   out.push(`\n## Uncertainty budget\n`);
   out.push(
-    `Expanded ${pct(p.uncertainty.expanded)} (k = ${p.uncertainty.coverageFactor.toFixed(2)}) at ${p.uncertainty.operatingPoint} flow` +
-      (p.uncertainty.monteCarlo ? `; Monte Carlo ${pct(p.uncertainty.monteCarlo.expanded)}.` : ".") + "\n",
+    `Expanded ${pct(p.uncertainty.expanded)} (k = ${
+      p.uncertainty.coverageFactor.toFixed(2)
+    }) at ${p.uncertainty.operatingPoint} flow` +
+      (p.uncertainty.monteCarlo
+        ? `; Monte Carlo ${pct(p.uncertainty.monteCarlo.expanded)}.`
+        : ".") +
+      "\n",
   );
   out.push(markdownTable(BUDGET_HEADERS, budgetRows(p)));
   out.push(`\n## Cautions\n`);
@@ -325,9 +371,16 @@ figure{margin:1em 0} figure svg{max-width:100%;height:auto}
 small.hash{font-family:monospace;color:#555}
 `;
 
-function htmlTable(headers: readonly string[], rows: readonly (readonly (string | number)[])[]): string {
-  return `<table><thead><tr>${headers.map((h) => `<th>${escapeHtml(h)}</th>`).join("")}</tr></thead><tbody>` +
-    rows.map((r) => `<tr>${r.map((c) => `<td>${escapeHtml(String(c))}</td>`).join("")}</tr>`).join("") +
+function htmlTable(
+  headers: readonly string[],
+  rows: readonly (readonly (string | number)[])[],
+): string {
+  return `<table><thead><tr>${
+    headers.map((h) => `<th>${escapeHtml(h)}</th>`).join("")
+  }</tr></thead><tbody>` +
+    rows.map((r) => `<tr>${r.map((c) => `<td>${escapeHtml(String(c))}</td>`).join("")}</tr>`).join(
+      "",
+    ) +
     "</tbody></table>";
 }
 
@@ -342,10 +395,14 @@ function htmlTable(headers: readonly string[], rows: readonly (readonly (string 
 export function planHtml(p: SitePlan): string {
   const b: string[] = [];
   b.push(`<h1>${escapeHtml(p.name)}</h1>`);
-  if (p.invented) b.push(`<p><em>Invented scenario: no figure here describes a real installation.</em></p>`);
+  if (p.invented) {
+    b.push(`<p><em>Invented scenario: no figure here describes a real installation.</em></p>`);
+  }
   b.push(`<p><small class="hash">registry ${p.registryHash}</small></p>`);
   b.push(
-    `<p class="${p.target?.reachable === false ? "verdict-no" : "verdict-ok"}">${escapeHtml(verdictLine(p))}</p>`,
+    `<p class="${p.target?.reachable === false ? "verdict-no" : "verdict-ok"}">${
+      escapeHtml(verdictLine(p))
+    }</p>`,
   );
   if (p.target?.suggestions.length) {
     b.push(`<ul>${p.target.suggestions.map((s) => `<li>${escapeHtml(s)}</li>`).join("")}</ul>`);
@@ -356,7 +413,10 @@ export function planHtml(p: SitePlan): string {
     ["outside diameter", mm(p.pipe.outsideDiameter)],
     ["wall thickness", mm(p.pipe.wallThickness, 3)],
     ["bore", mm(p.pipe.boreDiameter)],
-    ["lining", p.pipe.lining.map((l) => `${l.material} ${mm(l.thickness, 2)}`).join(", ") || "none"],
+    [
+      "lining",
+      p.pipe.lining.map((l) => `${l.material} ${mm(l.thickness, 2)}`).join(", ") || "none",
+    ],
     ["liquid", `${p.fluid.name} at ${formatQuantity(p.fluid.temperature, "degC", 3)}`],
     ["sound speed", formatQuantity(p.fluid.soundSpeed, "m/s", 5)],
     ["kinematic viscosity", formatQuantity(p.fluid.kinematicViscosity, "mm^2/s", 3)],
@@ -401,7 +461,9 @@ export function planHtml(p: SitePlan): string {
         yLabel: "spacing (mm)",
         series: temps.map((m) => ({
           name: `${m.name} mounting`,
-          points: m.overTemperature!.map((r) => [r.temperature - 273.15, r.spacing * 1000] as const),
+          points: m.overTemperature!.map((r) =>
+            [r.temperature - 273.15, r.spacing * 1000] as const
+          ),
         })),
       })
     }</figure>`);
@@ -412,7 +474,19 @@ export function planHtml(p: SitePlan): string {
     const r = p.straightRun;
     b.push(`<h2>Straight run</h2>`);
     b.push(
-      `<p>${escapeHtml(`${r.verdict} at ${formatQuantity(r.position, "m", 3)} (${r.positionSource}). Common-practice position ${formatQuantity(r.commonPracticePosition, "m", 3)}; model-ranked position ${formatQuantity(r.recommendedPosition, "m", 3)}. Estimated profile error ${pct(r.estimatedProfileError, 2)} ± ${pct(r.estimatedProfileErrorSpread, 2)}: an estimate from a model, not a calibration.`)}</p>`,
+      `<p>${
+        escapeHtml(
+          `${r.verdict} at ${
+            formatQuantity(r.position, "m", 3)
+          } (${r.positionSource}). Common-practice position ${
+            formatQuantity(r.commonPracticePosition, "m", 3)
+          }; model-ranked position ${
+            formatQuantity(r.recommendedPosition, "m", 3)
+          }. Estimated profile error ${pct(r.estimatedProfileError, 2)} ± ${
+            pct(r.estimatedProfileErrorSpread, 2)
+          }: an estimate from a model, not a calibration.`,
+        )
+      }</p>`,
     );
     b.push(`<ul>${r.reasons.map((x) => `<li>${escapeHtml(x)}</li>`).join("")}</ul>`);
     b.push(`<figure>${
@@ -432,28 +506,50 @@ export function planHtml(p: SitePlan): string {
         title: "Estimated profile error along the run (model estimate)",
         xLabel: "distance from the upstream fitting (m)",
         yLabel: "estimated error (%)",
-        series: [{ name: "estimate", points: r.errorAlongRun.map((x) => [x.position, x.error * 100] as const) }],
+        series: [{
+          name: "estimate",
+          points: r.errorAlongRun.map((x) => [x.position, x.error * 100] as const),
+        }],
         vLines: [{ x: r.position, label: "meter" }],
       })
     }</figure>`);
   }
   b.push(`<h2>Uncertainty budget</h2>`);
   b.push(
-    `<p>${escapeHtml(`Expanded ${pct(p.uncertainty.expanded)} (k = ${p.uncertainty.coverageFactor.toFixed(2)}, GUM) at ${p.uncertainty.operatingPoint} flow` + (p.uncertainty.monteCarlo ? `; Monte Carlo ${pct(p.uncertainty.monteCarlo.expanded)} from ${p.uncertainty.monteCarlo.draws} draws.` : "."))}</p>`,
+    `<p>${
+      escapeHtml(
+        `Expanded ${pct(p.uncertainty.expanded)} (k = ${
+          p.uncertainty.coverageFactor.toFixed(2)
+        }, GUM) at ${p.uncertainty.operatingPoint} flow` + (p.uncertainty.monteCarlo
+          ? `; Monte Carlo ${
+            pct(p.uncertainty.monteCarlo.expanded)
+          } from ${p.uncertainty.monteCarlo.draws} draws.`
+          : "."),
+      )
+    }</p>`,
   );
   b.push(`<figure>${
     svgBarChart({
       title: "Relative standard uncertainty contributions",
       unit: "%",
-      bars: p.uncertainty.budget.map((x) => ({ label: x.name, value: x.relativeContribution * 100 })),
+      bars: p.uncertainty.budget.map((x) => ({
+        label: x.name,
+        value: x.relativeContribution * 100,
+      })),
     })
   }</figure>`);
   b.push(htmlTable(BUDGET_HEADERS, budgetRows(p)));
-  b.push(`<h2>Cautions</h2><ul>${
-    [...p.cautions, REPORT_SAFETY].map((c) => `<li>${escapeHtml(c)}</li>`).join("")
-  }</ul>`);
+  b.push(
+    `<h2>Cautions</h2><ul>${
+      [...p.cautions, REPORT_SAFETY].map((c) => `<li>${escapeHtml(c)}</li>`).join("")
+    }</ul>`,
+  );
   if (p.warnings.length) {
-    b.push(`<h2>Warnings</h2><ul>${p.warnings.map((w) => `<li>${escapeHtml(w.message)}</li>`).join("")}</ul>`);
+    b.push(
+      `<h2>Warnings</h2><ul>${
+        p.warnings.map((w) => `<li>${escapeHtml(w.message)}</li>`).join("")
+      }</ul>`,
+    );
   }
   b.push(`<h2>Trace</h2>`);
   b.push(htmlTable(TRACE_HEADERS, traceRows(p)));
@@ -468,7 +564,11 @@ export function planHtml(p: SitePlan): string {
  * @returns HTML text
  */
 export function fleetHtml(
-  rows: readonly ({ row: (string | number)[]; href: string } | { id: string; name: string; error: string })[],
+  rows: readonly ({ row: (string | number)[]; href: string } | {
+    id: string;
+    name: string;
+    error: string;
+  })[],
   title = "Fleet summary",
 ): string {
   const body = `<h1>${escapeHtml(title)}</h1><table><thead><tr>${
@@ -476,12 +576,16 @@ export function fleetHtml(
   }</tr></thead><tbody>${
     rows.map((r) =>
       "row" in r
-        ? `<tr>${r.row.map((c, i) =>
-          i === 1
-            ? `<td><a href="${escapeHtml(r.href)}">${escapeHtml(String(c))}</a></td>`
-            : `<td>${escapeHtml(String(c))}</td>`
-        ).join("")}</tr>`
-        : `<tr><td>${escapeHtml(r.id)}</td><td>${escapeHtml(r.name)}</td><td colspan="7">refused: ${escapeHtml(r.error)}</td></tr>`
+        ? `<tr>${
+          r.row.map((c, i) =>
+            i === 1
+              ? `<td><a href="${escapeHtml(r.href)}">${escapeHtml(String(c))}</a></td>`
+              : `<td>${escapeHtml(String(c))}</td>`
+          ).join("")
+        }</tr>`
+        : `<tr><td>${escapeHtml(r.id)}</td><td>${escapeHtml(r.name)}</td><td colspan="7">refused: ${
+          escapeHtml(r.error)
+        }</td></tr>`
     ).join("")
   }</tbody></table><p>${escapeHtml(REPORT_SAFETY)}</p>`;
   return htmlPage({ title, body, css: EXTRA_CSS });
@@ -496,7 +600,9 @@ export function fleetHtml(
 export function reconciliationText(r: Reconciliation): string {
   const out: string[] = [`${r.name}`, `registry ${r.registryHash}`, ""];
   out.push(
-    `liquid temperature ${formatQuantity(r.temperature, "degC", 3)}, wall ${mm(r.wallThickness, 3)}`,
+    `liquid temperature ${formatQuantity(r.temperature, "degC", 3)}, wall ${
+      mm(r.wallThickness, 3)
+    }`,
   );
   out.push(textTable(
     ["mounting", "liquid time", "planned", "inferred c", "registry c", "difference", "agrees"],
@@ -512,12 +618,16 @@ export function reconciliationText(r: Reconciliation): string {
   ));
   for (const m of r.mountings) {
     for (const c of m.causes) {
-      out.push(`  ${m.traverses}: ${c.plausible ? "likely" : "unlikely"} ${c.cause}: ${c.explanation}`);
+      out.push(
+        `  ${m.traverses}: ${c.plausible ? "likely" : "unlikely"} ${c.cause}: ${c.explanation}`,
+      );
     }
     if (m.flow) {
       out.push(
         `  ${m.traverses}: flow ${formatQuantity(m.flow.plannedFlowRate, "L/s", 4)} as planned → ` +
-          `${formatQuantity(m.flow.correctedFlowRate, "L/s", 4)} corrected (${pct(m.flow.relativeCorrection, 2)})`,
+          `${formatQuantity(m.flow.correctedFlowRate, "L/s", 4)} corrected (${
+            pct(m.flow.relativeCorrection, 2)
+          })`,
       );
     }
   }

@@ -13,7 +13,7 @@ export {
   siteFiles,
   SiteInputError,
 } from "./read.ts";
-export type { ReadSiteOptions } from "./read.ts";
+export type { ReadSiteOptions, SitesCsvResult } from "./read.ts";
 export type * from "./schema.ts";
 export {
   type MountingPlan,

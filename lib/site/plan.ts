@@ -16,12 +16,12 @@ import { defaultRegistry, type Registry } from "../registry/mod.ts";
 import { pipe as resolvePipe, type PipeSpec, type ResolvedPipe } from "../pipe/mod.ts";
 import { liquidProperties, type LiquidState } from "../liquids/mod.ts";
 import {
-  clampOnPath,
   type ClampOnInputs,
   type ClampOnPath,
+  clampOnPath,
   minimumResolvableVelocity,
-  searchWindow,
   type SearchWindow,
+  searchWindow,
   signalBudget,
   techniqueScreening,
   transitTimes,
@@ -77,7 +77,10 @@ const ASSUMPTION_TEXT: Record<keyof typeof PLAN_ASSUMPTIONS, [string, string]> =
   caliperHalfWidth: ["outside diameter by caliper, half-width", "m"],
   fixedDelayHalfWidth: ["fixed delay after zero setting, half-width", "s"],
   defaultTimingResolution: ["timing resolution when none is stated", "s"],
-  resolvableMultiple: ["Δt at minimum flow over timing offset, least ratio to count resolvable", ""],
+  resolvableMultiple: [
+    "Δt at minimum flow over timing offset, least ratio to count resolvable",
+    "",
+  ],
   defaultOdRelative: ["outside diameter, relative half-width when no tolerance is known", ""],
 };
 
@@ -147,8 +150,11 @@ export interface MountingPlan {
   readonly fluidPathLength: number;
   /** Zero-flow times: liquid, wall, lining, total, s. */
   readonly fluidTime: number;
+  /** Time in the wall, in and out, s. */
   readonly wallTime: number;
+  /** Time in the lining, in and out, s. */
   readonly liningTime: number;
+  /** Zero-flow arrival time without fixed delays, s. */
   readonly totalTime: number;
   /** Search window. */
   readonly searchWindow: SearchWindow;
@@ -166,9 +172,13 @@ export interface MountingPlan {
   readonly signal: { readonly totalDb: number; readonly rating: string };
   /** Spacing across the seasonal temperature range (when given). */
   readonly overTemperature?: readonly {
+    /** Liquid temperature, K. */
     readonly temperature: number;
+    /** Spacing at that temperature, m. */
     readonly spacing: number;
+    /** fluidSoundSpeed */
     readonly fluidSoundSpeed: number;
+    /** Zero-flow arrival time without fixed delays, s. */
     readonly totalTime: number;
   }[];
   /** Expanded relative uncertainty per operating point (GUM, k = 2). */
@@ -177,104 +187,188 @@ export interface MountingPlan {
 
 /** A budget line in the plan. */
 export interface PlanBudgetLine {
+  /** Site name. */
   readonly name: string;
+  /** Best estimate (SI). */
   readonly value: number;
+  /** SI unit of value. */
   readonly unit: string;
+  /** Standard uncertainty (SI). */
   readonly standardUncertainty: number;
+  /** Distribution assigned. */
   readonly distribution: string;
+  /** Sensitivity coefficient ∂Q/∂x. */
   readonly sensitivity: number;
   /** Relative contribution |c·u| / Q. */
   readonly relativeContribution: number;
   /** Share of the variance. */
   readonly share: number;
+  /** Source id. */
   readonly source: string;
+  /** Basis of the value. */
   readonly basis: string;
 }
 
 /** The plan of one site. SI throughout. */
 export interface SitePlan {
+  /** Site name. */
   readonly name: string;
+  /** Short id of the site, for fleets. */
   readonly id?: string;
+  /** True for an invented scenario (demo). */
   readonly invented: boolean;
+  /** SHA-256 content hash of the reference data the plan was computed from. */
   readonly registryHash: string;
+  /** The pipe as planned, SI. */
   readonly pipe: {
+    /** Outside diameter, m. */
     readonly outsideDiameter: number;
+    /** Wall thickness used, m. */
     readonly wallThickness: number;
+    /** Inside diameter of the wall, m. */
     readonly insideDiameter: number;
+    /** Diameter of the liquid bore (inside the lining), m. */
     readonly boreDiameter: number;
+    /** Wall material id. */
     readonly material: string;
+    /** Longitudinal sound speed of the wall, m/s. */
     readonly wallSoundSpeed: number;
+    /** Shear sound speed of the wall, m/s. */
     readonly wallShearSpeed?: number;
+    /** Lining layers: material, thickness (m), sound speed (m/s). */
     readonly lining: readonly { material: string; thickness: number; soundSpeed: number }[];
+    /** What the pipe is: catalogue designation or measured. */
     readonly description: string;
+    /** Thickness-gauge reading, m, when given. */
     readonly measuredWallThickness?: number;
   };
+  /** The liquid at operating conditions, SI. */
   readonly fluid: {
+    /** Liquid id. */
     readonly liquid: string;
+    /** Site name. */
     readonly name: string;
+    /** Liquid temperature, K. */
     readonly temperature: number;
+    /** Absolute pressure, Pa. */
     readonly pressure: number;
+    /** Liquid sound speed, m/s. */
     readonly soundSpeed: number;
+    /** Half-width of the sound-speed spread, m/s. */
     readonly soundSpeedSpread: number;
+    /** Liquid density, kg/m³. */
     readonly density: number;
+    /** Kinematic viscosity, m²/s. */
     readonly kinematicViscosity: number;
   };
+  /** The transducer pair as planned, SI. */
   readonly transducer: {
+    /** Wedge sound speed at the operating temperature, m/s. */
     readonly wedgeSoundSpeed: number;
+    /** Beam angle in the wedge, rad. */
     readonly wedgeAngle: number;
+    /** Centre frequency, Hz. */
     readonly frequency: number;
+    /** Timing resolution, s. */
     readonly timingResolution: number;
+    /** Zero offset of Δt, s. */
     readonly zeroOffset: number;
   };
+  /** Minimum, design and maximum flow. */
   readonly operatingPoints: readonly OperatingPoint[];
+  /** Relative change of the profile factor across the flow range. */
   readonly profileFactorChange: number;
+  /** Every mounting evaluated. */
   readonly mountings: readonly MountingPlan[];
+  /** Traverse count of the mounting the budget is for. */
   readonly recommendedMounting: number;
+  /** Straight-run assessment, when a run is described. */
   readonly straightRun?: {
+    /** Straight-run verdict: meets, marginal or short. */
     readonly verdict: string;
+    /** Meter position from the upstream fitting, m. */
     readonly position: number;
+    /** Whether the position was planned by the site or recommended here. */
     readonly positionSource: "planned" | "recommended";
+    /** Straight length upstream of the meter, in diameters. */
     readonly upstreamDiameters: number;
+    /** Straight length downstream of the meter, in diameters. */
     readonly downstreamDiameters: number | null;
+    /** Upstream length common practice asks, in diameters. */
     readonly requiredUpstream: number;
+    /** Downstream length common practice asks, in diameters. */
     readonly requiredDownstream: number;
+    /** Common-practice position from the upstream fitting, m. */
     readonly commonPracticePosition: number;
+    /** Model-ranked position from the upstream fitting, m. */
     readonly recommendedPosition: number;
+    /** Model-ranked path-plane angle, rad. */
     readonly recommendedOrientation: number;
+    /** Estimated relative error from the disturbed profile (an estimate). */
     readonly estimatedProfileError: number;
+    /** Half-width of that estimate. */
     readonly estimatedProfileErrorSpread: number;
+    /** Reasons for the verdict. */
     readonly reasons: readonly string[];
+    /** Notes of the ranking and the model. */
     readonly notes: readonly string[];
+    /** Estimated error along the run: position (m) and relative error. */
     readonly errorAlongRun: readonly { position: number; error: number }[];
+    /** Length of the straight run, m. */
     readonly runLength: number;
+    /** Upstream fitting id. */
     readonly upstreamFitting: string;
+    /** Downstream fitting id. */
     readonly downstreamFitting: string;
   };
+  /** Uncertainty budget of the recommended mounting. */
   readonly uncertainty: {
+    /** Traverse count the budget is for. */
     readonly mounting: number;
+    /** Operating point the budget table is for. */
     readonly operatingPoint: OperatingPoint["label"];
+    /** Expanded relative uncertainty (k = 2). */
     readonly expanded: number;
+    /** Coverage factor. */
     readonly coverageFactor: number;
+    /** Expanded relative uncertainty per operating point. */
     readonly expandedByPoint: readonly { label: string; expanded: number }[];
+    /** Budget lines, largest first. */
     readonly budget: readonly PlanBudgetLine[];
+    /** Monte Carlo check (JCGM 101) beside GUM. */
     readonly monteCarlo?: {
+      /** Number of Monte Carlo draws. */
       readonly draws: number;
+      /** Seed of the random stream. */
       readonly seed: number;
+      /** Expanded relative uncertainty (k = 2). */
       readonly expanded: number;
+      /** 95 % coverage interval of the flow rate, m³/s. */
       readonly interval: readonly [number, number];
     };
   };
+  /** Verdict on the target uncertainty, when one is stated. */
   readonly target?: {
+    /** Target expanded relative uncertainty (k = 2). */
     readonly uncertainty: number;
+    /** Whether the worst expanded uncertainty meets the target. */
     readonly reachable: boolean;
+    /** Worst expanded relative uncertainty over the operating points. */
     readonly worstExpanded: number;
+    /** Operating point where it is worst. */
     readonly worstPoint: string;
+    /** What would reach the target. */
     readonly suggestions: readonly string[];
   };
+  /** Which technique the stated solids and gas content favours. */
   readonly technique: { readonly favours: string; readonly reasons: readonly string[] };
+  /** Largest contributor to the uncertainty budget. */
   readonly mainLimitation: string;
+  /** Every constant and formulation used, with source and basis. */
   readonly trace: readonly TraceEntry[];
+  /** Safety and interpretation cautions. */
   readonly cautions: readonly string[];
+  /** Warnings (defaults assumed, extrapolations, estimates). */
   readonly warnings: readonly Warning[];
 }
 
@@ -328,15 +422,19 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
   const warnings: Warning[] = site.defaults.map((d) => ({ code: "default", message: d.message }));
   const tr: TraceEntry[] = [];
   const addTrace = (entries: readonly TraceEntry[] | undefined) => {
-    if (entries) for (const e of entries) tr.push(e);
+    if (entries) { for (const e of entries) tr.push(e); }
   };
 
   // --- pipe --------------------------------------------------------------------------
   const sp = site.pipe;
-  const liningIn = sp.lining ? [{ material: sp.lining.material, thickness: sp.lining.thickness }] : undefined;
+  const liningIn = sp.lining
+    ? [{ material: sp.lining.material, thickness: sp.lining.thickness }]
+    : undefined;
   let spec: PipeSpec;
   if (sp.geometry === "measured") {
-    if (!sp.material) throw new InputError("pipe.material", "nothing", "a material id for a measured pipe");
+    if (!sp.material) {
+      throw new InputError("pipe.material", "nothing", "a material id for a measured pipe");
+    }
     spec = {
       outsideDiameter: sp.outsideDiameter,
       circumference: sp.circumference,
@@ -344,7 +442,9 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
       material: sp.material,
       lining: liningIn,
       uncertainty: {
-        outsideDiameter: sp.outsideDiameter !== undefined ? PLAN_ASSUMPTIONS.caliperHalfWidth : undefined,
+        outsideDiameter: sp.outsideDiameter !== undefined
+          ? PLAN_ASSUMPTIONS.caliperHalfWidth
+          : undefined,
         circumference: sp.circumference !== undefined ? PLAN_ASSUMPTIONS.tapeHalfWidth : undefined,
         wallThickness: PLAN_ASSUMPTIONS.gaugeHalfWidth,
       },
@@ -369,7 +469,9 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
   const wallL = sp.wallSoundSpeed ?? mat.longitudinal;
   const wallS = sp.wallShearSpeed ?? mat.shear;
   if (sp.wallSoundSpeed !== undefined) {
-    tr.push(traceEntry("wall longitudinal sound speed (site override)", wallL, "m/s", "site", "input"));
+    tr.push(
+      traceEntry("wall longitudinal sound speed (site override)", wallL, "m/s", "site", "input"),
+    );
   }
   if (sp.wallShearSpeed !== undefined) {
     tr.push(traceEntry("wall shear sound speed (site override)", wallS!, "m/s", "site", "input"));
@@ -386,10 +488,22 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
       });
     }
     wallThickness = sp.measuredWallThickness;
-    tr.push(traceEntry("wall thickness (thickness-gauge reading)", wallThickness, "m", "site", "measured"));
+    tr.push(
+      traceEntry(
+        "wall thickness (thickness-gauge reading)",
+        wallThickness,
+        "m",
+        "site",
+        "measured",
+      ),
+    );
   }
   if (!(wallThickness < rp.outsideDiameter / 2)) {
-    throw new InputError("pipe.measuredWallThickness", fmtMm(wallThickness), "less than the outside radius");
+    throw new InputError(
+      "pipe.measuredWallThickness",
+      fmtMm(wallThickness),
+      "less than the outside radius",
+    );
   }
   const lining = rp.lining.map((l, i) => {
     const override = i === 0 ? sp.lining?.soundSpeed : undefined;
@@ -399,11 +513,22 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
       addTrace(lm.trace);
       c = lm.longitudinal;
     } else tr.push(traceEntry("lining sound speed (site override)", c, "m/s", "site", "input"));
-    return { material: l.material, thickness: l.thickness, soundSpeed: c, overridden: override !== undefined };
+    return {
+      material: l.material,
+      thickness: l.thickness,
+      soundSpeed: c,
+      overridden: override !== undefined,
+    };
   });
   const insideDiameter = rp.outsideDiameter - 2 * wallThickness;
   const bore = insideDiameter - 2 * lining.reduce((s, l) => s + l.thickness, 0);
-  if (!(bore > 0)) throw new InputError("pipe.lining.thickness", fmtMm(lining[0]?.thickness ?? 0), "a lining thinner than the inside radius");
+  if (!(bore > 0)) {
+    throw new InputError(
+      "pipe.lining.thickness",
+      fmtMm(lining[0]?.thickness ?? 0),
+      "a lining thinner than the inside radius",
+    );
+  }
   const area = Math.PI / 4 * bore * bore;
 
   // --- fluid ---------------------------------------------------------------------------
@@ -419,8 +544,12 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
   const c = fl.soundSpeed ?? liq.soundSpeed;
   const rho = fl.density ?? liq.density;
   const nu = fl.kinematicViscosity ?? liq.kinematicViscosity;
-  if (fl.soundSpeed !== undefined) tr.push(traceEntry("liquid sound speed (site override)", c, "m/s", "site", "input"));
-  if (fl.density !== undefined) tr.push(traceEntry("liquid density (site override)", rho, "kg/m^3", "site", "input"));
+  if (fl.soundSpeed !== undefined) {
+    tr.push(traceEntry("liquid sound speed (site override)", c, "m/s", "site", "input"));
+  }
+  if (fl.density !== undefined) {
+    tr.push(traceEntry("liquid density (site override)", rho, "kg/m^3", "site", "input"));
+  }
   if (fl.kinematicViscosity !== undefined) {
     tr.push(traceEntry("liquid kinematic viscosity (site override)", nu, "m^2/s", "site", "input"));
   }
@@ -444,7 +573,9 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
       ? PLAN_ASSUMPTIONS.statedWedgeSpeedRelative * cw
       : wm.longitudinalSpread ?? PLAN_ASSUMPTIONS.statedWedgeSpeedRelative * cw;
     if (td.wedgeSoundSpeed === undefined && dcwdT !== 0) {
-      tr.push(traceEntry("wedge sound speed at the liquid temperature", cw, "m/s", wm.source, "computed"));
+      tr.push(
+        traceEntry("wedge sound speed at the liquid temperature", cw, "m/s", wm.source, "computed"),
+      );
     }
   } else if (td.wedgeSoundSpeed !== undefined) {
     cw = td.wedgeSoundSpeed;
@@ -480,7 +611,10 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
   // --- operating points ----------------------------------------------------------------
   const roughness = sp.roughness ?? mat.roughness ?? 0;
   if (sp.roughness === undefined && mat.roughness === undefined) {
-    warnings.push({ code: "roughness", message: `no roughness for ${materialId}: smooth bore assumed` });
+    warnings.push({
+      code: "roughness",
+      message: `no roughness for ${materialId}: smooth bore assumed`,
+    });
   }
   const rr = roughness / bore;
   const flows: { label: OperatingPoint["label"]; q: number }[] = [];
@@ -492,7 +626,11 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
   const points: OperatingPoint[] = flows.map(({ label, q }) => {
     const V = q / area;
     const re = reynoldsNumber(V, bore, nu);
-    const est = profileFactorEstimate(re, { relativeRoughness: rr, extrapolate: true, warnings: flowWarnings });
+    const est = profileFactorEstimate(re, {
+      relativeRoughness: rr,
+      extrapolate: true,
+      warnings: flowWarnings,
+    });
     let f = NaN;
     try {
       f = frictionFactor(re, rr);
@@ -511,11 +649,21 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
       frictionFactor: f,
     };
   });
-  for (const w of flowWarnings) if (!warnings.some((x) => x.message === w.message)) warnings.push(w);
+  for (const w of flowWarnings) {
+    if (!warnings.some((x) => x.message === w.message)) warnings.push(w);
+  }
   const kValues = points.map((p) => p.profileFactor);
   const profileFactorChange = (Math.max(...kValues) - Math.min(...kValues)) /
     ((Math.max(...kValues) + Math.min(...kValues)) / 2);
-  tr.push(traceEntry("formulation: profile factor (power law, Nikuradse n; spread over models)", "lib/flow", "", "common-practice", "computed"));
+  tr.push(
+    traceEntry(
+      "formulation: profile factor (power law, Nikuradse n; spread over models)",
+      "lib/flow",
+      "",
+      "common-practice",
+      "computed",
+    ),
+  );
 
   // --- mountings -----------------------------------------------------------------------
   const baseInputs = (n: number): ClampOnInputs => ({
@@ -631,11 +779,12 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
     });
     if (n === site.mountings[0]) addTrace(budget.trace);
   }
-  for (const w of budgetWarnings) if (!warnings.some((x) => x.message === w.message)) warnings.push(w);
+  for (const w of budgetWarnings) {
+    if (!warnings.some((x) => x.message === w.message)) warnings.push(w);
+  }
 
   // --- straight run --------------------------------------------------------------------
   let straightRun: SitePlan["straightRun"];
-  let installError = 0;
   let installHalf = 0;
   const reList = points.map((p) => p.reynolds);
   const designPoint = points.find((p) => p.label === "design") ?? points[points.length - 1];
@@ -673,7 +822,6 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
       fluidAngle: provisional.fluidAngle,
       relativeRoughness: rr,
     });
-    installError = est.error;
     installHalf = Math.abs(est.error) + est.spread;
     const along: { position: number; error: number }[] = [];
     for (let i = 0; i <= 40; i++) {
@@ -691,7 +839,15 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
         }).error,
       });
     }
-    tr.push(traceEntry("formulation: distorted-profile model (estimate)", "lib/installation", "", "snellpath-installation-model", "recalled"));
+    tr.push(
+      traceEntry(
+        "formulation: distorted-profile model (estimate)",
+        "lib/installation",
+        "",
+        "snellpath-installation-model",
+        "recalled",
+      ),
+    );
     straightRun = {
       verdict: check.verdict,
       position,
@@ -729,19 +885,105 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
     const uWallTime = path.wallTime *
       Math.hypot(wallTolHalf / wallThickness, (mat.longitudinalSpread ?? 0) / wallL) / Math.sqrt(3);
     const uLinTime = path.liningTime *
-      Math.hypot(PLAN_ASSUMPTIONS.liningThicknessRelative, lining.some((l) => !l.overridden) ? PLAN_ASSUMPTIONS.liningSpeedRelative : 0) /
+      Math.hypot(
+        PLAN_ASSUMPTIONS.liningThicknessRelative,
+        lining.some((l) => !l.overridden) ? PLAN_ASSUMPTIONS.liningSpeedRelative : 0,
+      ) /
       Math.sqrt(3);
-    const uTau = Math.hypot(PLAN_ASSUMPTIONS.fixedDelayHalfWidth / Math.sqrt(3), uWallTime, uLinTime);
+    const uTau = Math.hypot(
+      PLAN_ASSUMPTIONS.fixedDelayHalfWidth / Math.sqrt(3),
+      uWallTime,
+      uLinTime,
+    );
     const inputs: UncertainInput[] = [
-      u("outside diameter", rp.outsideDiameter, odHalf / Math.sqrt(3), "rectangular", "m", rp.tolerances?.source ?? "common-practice", rp.tolerances ? rp.tolerances.basis as UncertainInput["basis"] : "common-practice"),
-      u("wall thickness", wallThickness, wallTolHalf / Math.sqrt(3), "rectangular", "m", sp.measuredWallThickness !== undefined ? "common-practice" : rp.tolerances?.source ?? "common-practice", sp.measuredWallThickness !== undefined ? "measured" : rp.tolerances ? rp.tolerances.basis as UncertainInput["basis"] : "common-practice"),
-      u("lining thickness", linThick, PLAN_ASSUMPTIONS.liningThicknessRelative * linThick / Math.sqrt(3), "rectangular", "m", "common-practice", "common-practice"),
-      u("wedge sound speed", cw, Math.hypot(cwHalf, Math.abs(dcwdT) * PLAN_ASSUMPTIONS.wedgeTemperatureHalfWidth) / Math.sqrt(3), "rectangular", "m/s", td.wedgeMaterial ? reg.material(td.wedgeMaterial).source : "common-practice", td.wedgeMaterial ? "recalled" : "common-practice"),
-      u("wedge angle", td.wedgeAngle, PLAN_ASSUMPTIONS.wedgeAngleHalfWidth / Math.sqrt(3), "rectangular", "rad", "common-practice", "common-practice"),
-      u("transit-time difference (zero offset, resolution)", dt, Math.hypot(zeroOffset / Math.sqrt(3), timingResolution / Math.sqrt(12)), "normal", "s", "common-practice", "input"),
-      u("time in the liquid (fixed delays)", path.fluidTime, uTau, "normal", "s", "common-practice", "common-practice"),
-      u("profile factor (model spread)", p.profileFactor, p.profileFactorSpread / Math.sqrt(3), "rectangular", "", "common-practice", "computed"),
-      u("installation effect (estimate)", 0, installHalf / Math.sqrt(3), "rectangular", "", "snellpath-installation-model", "recalled"),
+      u(
+        "outside diameter",
+        rp.outsideDiameter,
+        odHalf / Math.sqrt(3),
+        "rectangular",
+        "m",
+        rp.tolerances?.source ?? "common-practice",
+        rp.tolerances ? rp.tolerances.basis as UncertainInput["basis"] : "common-practice",
+      ),
+      u(
+        "wall thickness",
+        wallThickness,
+        wallTolHalf / Math.sqrt(3),
+        "rectangular",
+        "m",
+        sp.measuredWallThickness !== undefined
+          ? "common-practice"
+          : rp.tolerances?.source ?? "common-practice",
+        sp.measuredWallThickness !== undefined
+          ? "measured"
+          : rp.tolerances
+          ? rp.tolerances.basis as UncertainInput["basis"]
+          : "common-practice",
+      ),
+      u(
+        "lining thickness",
+        linThick,
+        PLAN_ASSUMPTIONS.liningThicknessRelative * linThick / Math.sqrt(3),
+        "rectangular",
+        "m",
+        "common-practice",
+        "common-practice",
+      ),
+      u(
+        "wedge sound speed",
+        cw,
+        Math.hypot(cwHalf, Math.abs(dcwdT) * PLAN_ASSUMPTIONS.wedgeTemperatureHalfWidth) /
+          Math.sqrt(3),
+        "rectangular",
+        "m/s",
+        td.wedgeMaterial ? reg.material(td.wedgeMaterial).source : "common-practice",
+        td.wedgeMaterial ? "recalled" : "common-practice",
+      ),
+      u(
+        "wedge angle",
+        td.wedgeAngle,
+        PLAN_ASSUMPTIONS.wedgeAngleHalfWidth / Math.sqrt(3),
+        "rectangular",
+        "rad",
+        "common-practice",
+        "common-practice",
+      ),
+      u(
+        "transit-time difference (zero offset, resolution)",
+        dt,
+        Math.hypot(zeroOffset / Math.sqrt(3), timingResolution / Math.sqrt(12)),
+        "normal",
+        "s",
+        "common-practice",
+        "input",
+      ),
+      u(
+        "time in the liquid (fixed delays)",
+        path.fluidTime,
+        uTau,
+        "normal",
+        "s",
+        "common-practice",
+        "common-practice",
+      ),
+      u(
+        "profile factor (model spread)",
+        p.profileFactor,
+        p.profileFactorSpread / Math.sqrt(3),
+        "rectangular",
+        "",
+        "common-practice",
+        "computed",
+      ),
+      u(
+        "installation effect (estimate)",
+        0,
+        installHalf / Math.sqrt(3),
+        "rectangular",
+        "",
+        "snellpath-installation-model",
+        "recalled",
+      ),
     ];
     return { inputs, result: gumPropagate(flowModel, inputs) };
   };
@@ -788,8 +1030,26 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
       interval: r.interval,
     };
   }
-  tr.push(traceEntry("formulation: GUM law of propagation", "JCGM 100:2008", "", "jcgm-100-2008", "transcribed"));
-  if (mc) tr.push(traceEntry("formulation: Monte Carlo propagation", "JCGM 101:2008", "", "jcgm-101-2008", "transcribed"));
+  tr.push(
+    traceEntry(
+      "formulation: GUM law of propagation",
+      "JCGM 100:2008",
+      "",
+      "jcgm-100-2008",
+      "transcribed",
+    ),
+  );
+  if (mc) {
+    tr.push(
+      traceEntry(
+        "formulation: Monte Carlo propagation",
+        "JCGM 101:2008",
+        "",
+        "jcgm-101-2008",
+        "transcribed",
+      ),
+    );
+  }
 
   // --- verdict -------------------------------------------------------------------------
   let target: SitePlan["target"];
@@ -800,7 +1060,9 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
     if (!reachable) {
       const { result: wr } = budgetFor(chosen, worstIdx);
       const top = wr.budget.slice(0, 3).map((b) => b.name);
-      for (const name of top) suggestions.push(...suggestionFor(name, straightRun, chosen.traverses));
+      for (const name of top) {
+        suggestions.push(...suggestionFor(name, straightRun, chosen.traverses));
+      }
       for (const m of mountingPlans) {
         if (m !== chosen && Math.max(...m.expandedByPoint) <= site.targetUncertainty) {
           suggestions.push(`the ${m.name} mounting (${m.traverses} traverses) reaches the target`);
@@ -821,7 +1083,10 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
     gasFraction: site.content?.gas,
   });
   if (technique.favours === "doppler") {
-    warnings.push({ code: "technique", message: `transit time is unlikely to work here: ${technique.reasons.join("; ")}` });
+    warnings.push({
+      code: "technique",
+      message: `transit time is unlikely to work here: ${technique.reasons.join("; ")}`,
+    });
   }
   const mainLimitation = budget[0]?.name ?? "";
 
@@ -843,7 +1108,11 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
       material: materialId,
       wallSoundSpeed: wallL,
       wallShearSpeed: wallS,
-      lining: lining.map(({ material, thickness, soundSpeed }) => ({ material, thickness, soundSpeed })),
+      lining: lining.map(({ material, thickness, soundSpeed }) => ({
+        material,
+        thickness,
+        soundSpeed,
+      })),
       description: rp.origin === "catalogue"
         ? `${rp.standard} NPS ${rp.nps} schedule ${rp.schedule}`
         : "measured pipe",
@@ -913,7 +1182,9 @@ function chooseMounting<T extends MountingPlan>(plans: readonly T[]): T {
   if (usable.length === 0) return plans[0];
   const resolvable = usable.filter((m) => m.resolvableAtMinimum);
   const pool = resolvable.length ? resolvable : usable;
-  const lowest = Math.min(...pool.map((m) => m.expandedByPoint.length ? Math.max(...m.expandedByPoint) : 0));
+  const lowest = Math.min(
+    ...pool.map((m) => m.expandedByPoint.length ? Math.max(...m.expandedByPoint) : 0),
+  );
   const good = pool.filter((m) =>
     !m.expandedByPoint.length || Math.max(...m.expandedByPoint) <= lowest * 1.05
   );
@@ -928,17 +1199,25 @@ function suggestionFor(
   if (name.startsWith("installation")) {
     const s = ["a longer straight run upstream, or a location further from the upstream fitting"];
     if (run && run.position !== run.recommendedPosition) {
-      s.push(`move to the recommended position ${run.recommendedPosition.toFixed(2)} m from the upstream fitting`);
+      s.push(
+        `move to the recommended position ${
+          run.recommendedPosition.toFixed(2)
+        } m from the upstream fitting`,
+      );
     }
     return s;
   }
   if (name.startsWith("wall thickness")) return ["measure the wall with a thickness gauge"];
   if (name.startsWith("outside diameter")) return ["measure the circumference with a tape"];
-  if (name.startsWith("lining")) return ["measure the lining thickness (for example at a cut or a fitting)"];
+  if (name.startsWith("lining")) {
+    return ["measure the lining thickness (for example at a cut or a fitting)"];
+  }
   if (name.startsWith("transit-time difference")) {
     return [`more traverses than ${traverses} (a longer path gives a larger Δt), or finer timing`];
   }
-  if (name.startsWith("profile factor")) return ["a multi-path arrangement, or a site with Reynolds number out of transition"];
+  if (name.startsWith("profile factor")) {
+    return ["a multi-path arrangement, or a site with Reynolds number out of transition"];
+  }
   if (name.startsWith("wedge")) return ["check the transducers' wedge data and temperature"];
   if (name.startsWith("time in the liquid")) return ["zero the fixed delays on site"];
   return [];
@@ -949,15 +1228,35 @@ function cautionsFor(T: number, p: number, liquid: string, lined: boolean): stri
     "Plans are estimates: installation-effect figures come from a model, not a calibration.",
     "Follow the site's permit-to-work system, local codes and licensed practice; they take precedence over this plan.",
   ];
-  if (T > 333.15) out.push(`Hot line (${(T - 273.15).toFixed(0)} °C): burn hazard; let lagging and surfaces be checked before contact.`);
-  if (T < 273.15 + 5) out.push("Cold line: condensation and ice; frost-burn hazard on bare metal.");
-  if (p > 1e6) out.push(`Pressurised line (${(p / 1e5).toFixed(1)} bar absolute): never loosen fittings or tapping points.`);
-  out.push("Lifting insulation or lagging may expose hot surfaces or hazardous fibres: have it surveyed first.");
-  out.push("Pits, chambers and vaults are confined spaces: gas test, permit and standby person first.");
-  if (!["water", "seawater"].includes(liquid)) {
-    out.push(`Process liquid (${liquid}): check the hazardous-area classification and use certified equipment.`);
+  if (T > 333.15) {
+    out.push(
+      `Hot line (${
+        (T - 273.15).toFixed(0)
+      } °C): burn hazard; let lagging and surfaces be checked before contact.`,
+    );
   }
-  if (lined) out.push("Lined pipe: do not cut or drill to check the lining; use records or a fitting.");
+  if (T < 273.15 + 5) out.push("Cold line: condensation and ice; frost-burn hazard on bare metal.");
+  if (p > 1e6) {
+    out.push(
+      `Pressurised line (${
+        (p / 1e5).toFixed(1)
+      } bar absolute): never loosen fittings or tapping points.`,
+    );
+  }
+  out.push(
+    "Lifting insulation or lagging may expose hot surfaces or hazardous fibres: have it surveyed first.",
+  );
+  out.push(
+    "Pits, chambers and vaults are confined spaces: gas test, permit and standby person first.",
+  );
+  if (!["water", "seawater"].includes(liquid)) {
+    out.push(
+      `Process liquid (${liquid}): check the hazardous-area classification and use certified equipment.`,
+    );
+  }
+  if (lined) {
+    out.push("Lined pipe: do not cut or drill to check the lining; use records or a fitting.");
+  }
   return out;
 }
 

@@ -51,6 +51,7 @@ export interface MismatchCause {
 
 /** Reconciliation of one mounting. */
 export interface MountingReconciliation {
+  /** Crossings of the bore. */
   readonly traverses: number;
   /** Time in the liquid from the reading: total − fixed delay − wall − lining, s. */
   readonly measuredLiquidTime: number;
@@ -70,23 +71,36 @@ export interface MountingReconciliation {
   readonly causes: readonly MismatchCause[];
   /** Flow from Δt or the indicated velocity, planned and corrected (when given). */
   readonly flow?: {
+    /** plannedVelocity */
     readonly plannedVelocity: number;
+    /** correctedVelocity */
     readonly correctedVelocity: number;
+    /** plannedFlowRate */
     readonly plannedFlowRate: number;
+    /** correctedFlowRate */
     readonly correctedFlowRate: number;
+    /** relativeCorrection */
     readonly relativeCorrection: number;
   };
 }
 
 /** Result of {@link reconcile}. */
 export interface Reconciliation {
+  /** Site name. */
   readonly name: string;
+  /** SHA-256 content hash of the reference data the plan was computed from. */
   readonly registryHash: string;
+  /** Liquid temperature used (measured when given), K. */
   readonly temperature: number;
+  /** Wall thickness used, m. */
   readonly wallThickness: number;
+  /** Per mounting read. */
   readonly mountings: readonly MountingReconciliation[];
+  /** One-line summary. */
   readonly summary: string;
+  /** Warnings (defaults assumed, extrapolations, estimates). */
   readonly warnings: readonly Warning[];
+  /** Every constant and formulation used, with source and basis. */
   readonly trace: readonly TraceEntry[];
 }
 
@@ -258,7 +272,8 @@ export function reconcile(
         // the temperature at which the registry's speed equals the inferred one (Newton steps
         // on c(T), started from the linear estimate)
         const opts = { salinity: site.fluid.salinity, extrapolate: true, warnings: [] };
-        const cAt = (x: number) => liquidProperties(site.fluid.liquid, x, site.fluid.pressure, opts).soundSpeed;
+        const cAt = (x: number) =>
+          liquidProperties(site.fluid.liquid, x, site.fluid.pressure, opts).soundSpeed;
         let Tx = T + diff / dcdT;
         for (let j = 0; j < 6; j++) {
           try {
@@ -293,8 +308,13 @@ export function reconcile(
       const needBore = bore - 2 * dWall;
       causes.push({
         cause: "wall-or-lining",
-        explanation: `the wall (or lining, or scale and deposits inside) would be ${Math.abs(dWall * 1e3).toFixed(2)} mm ` +
-          `${dWall > 0 ? "thicker" : "thinner"} than planned (bore ${(needBore * 1e3).toFixed(1)} mm)`,
+        explanation:
+          `the wall (or lining, or scale and deposits inside) would be ${
+            Math.abs(dWall * 1e3).toFixed(2)
+          } mm ` +
+          `${dWall > 0 ? "thicker" : "thinner"} than planned (bore ${
+            (needBore * 1e3).toFixed(1)
+          } mm)`,
         plausible: Math.abs(dWall) <= RECONCILE_BOUNDS.wallRelative * wall,
         score: Math.abs(dWall) / (RECONCILE_BOUNDS.wallRelative * wall),
       });
@@ -311,7 +331,9 @@ export function reconcile(
       if (site.fluid.liquid !== "water") {
         try {
           const w = liquidProperties("water", T, site.fluid.pressure);
-          if (Math.abs(w.soundSpeed - c) <= tolerance + w.soundSpeedSpread) matches.unshift("water");
+          if (Math.abs(w.soundSpeed - c) <= tolerance + w.soundSpeedSpread) {
+            matches.unshift("water");
+          }
         } catch {
           // not liquid water here
         }
@@ -344,7 +366,10 @@ export function reconcile(
     const kFor = (vPath: number) => {
       let k = plan.operatingPoints[0].profileFactor;
       for (let j = 0; j < 4; j++) {
-        k = profileFactor(Math.max(1, Math.abs(k * vPath) * bore / nu), { extrapolate: true, warnings: [] });
+        k = profileFactor(Math.max(1, Math.abs(k * vPath) * bore / nu), {
+          extrapolate: true,
+          warnings: [],
+        });
       }
       return k;
     };
@@ -390,7 +415,15 @@ export function reconcile(
     ? "readings agree with the plan within their uncertainty"
     : `readings disagree with the plan on ${bad.length} mounting(s); likeliest cause: ` +
       (bad[0].causes[0]?.explanation ?? "unknown");
-  tr.push(traceEntry("reconciliation bounds (temperature, wall, gas)", JSON.stringify(RECONCILE_BOUNDS), "", "common-practice", "common-practice"));
+  tr.push(
+    traceEntry(
+      "reconciliation bounds (temperature, wall, gas)",
+      JSON.stringify(RECONCILE_BOUNDS),
+      "",
+      "common-practice",
+      "common-practice",
+    ),
+  );
   return {
     name: site.name,
     registryHash: reg.hash,

@@ -155,7 +155,10 @@ export function gumPropagate(
     for (let i = 0; i < n; i++) {
       const xi = x[i];
       const u = inputs[i].standardUncertainty;
-      const h = u > 0 ? stepFraction * u : Math.max(Math.abs(xi), 1) * 1e-6;
+      let h = u > 0 ? stepFraction * u : Math.max(Math.abs(xi), 1) * 1e-6;
+      // A step lost in the rounding of x (u of 1e-320, or u far below x's last digit) would
+      // give 0/0 or a zero sensitivity: fall back to the step used for exact inputs.
+      if (!(xi + h !== xi && xi - h !== xi)) h = Math.max(Math.abs(xi), 1) * 1e-6;
       x[i] = xi + h;
       const up = model(x);
       x[i] = xi - h;

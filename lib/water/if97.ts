@@ -76,12 +76,18 @@ function gibbs(pi: number, tau: number): void {
   const ia = 1 / a, ib = 1 / b;
   // b can be negative (τ < 1.222 ⇔ T > 1134 K, outside region 1): integer powers by products
   // keep the sign. powB[J − jMin] = b^J.
+  // x^m = x^⌊m/2⌋ · x^⌈m/2⌉: about log₂ m roundings deep, close to Math.pow.
   powA[0] = 1;
-  for (let i = 1; i < powA.length; i++) powA[i] = powA[i - 1] * a;
+  powA[1] = a;
+  for (let m = 2; m < powA.length; m++) powA[m] = powA[m >> 1] * powA[m - (m >> 1)];
   const z = -jMin;
   powB[z] = 1;
-  for (let i = z + 1; i < powB.length; i++) powB[i] = powB[i - 1] * b;
-  for (let i = z - 1; i >= 0; i--) powB[i] = powB[i + 1] * ib;
+  powB[z + 1] = b;
+  for (let m = 2; z + m < powB.length; m++) {
+    powB[z + m] = powB[z + (m >> 1)] * powB[z + m - (m >> 1)];
+  }
+  if (z >= 1) powB[z - 1] = ib;
+  for (let m = 2; m <= z; m++) powB[z - m] = powB[z - (m >> 1)] * powB[z - m + (m >> 1)];
   // Sums of n·I^…·J^…·a^I·b^J; the 1/a and 1/b factors of the derivatives are applied after.
   let g = 0, gp = 0, gpp = 0, gt = 0, gtt = 0, gpt = 0;
   for (let i = 0; i < k.n.length; i++) {

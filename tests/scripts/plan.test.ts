@@ -51,7 +51,20 @@ Deno.test("one site: JSON on stdout with the required fields, SI, and the hash",
   const r = await plan(["data/demo/01-reservoir-outlet.yaml", "--json"]);
   assert.equal(r.code, 0, r.stderr);
   const p = JSON.parse(r.stdout);
-  for (const k of ["pipe", "fluid", "mountings", "operatingPoints", "straightRun", "uncertainty", "trace", "registryHash", "cautions", "warnings"]) {
+  for (
+    const k of [
+      "pipe",
+      "fluid",
+      "mountings",
+      "operatingPoints",
+      "straightRun",
+      "uncertainty",
+      "trace",
+      "registryHash",
+      "cautions",
+      "warnings",
+    ]
+  ) {
     assert.ok(k in p, `missing ${k}`);
   }
   assert.ok(p.mountings[0].spacing > 0.01 && p.mountings[0].spacing < 1, "spacing in metres");
@@ -91,11 +104,21 @@ Deno.test("atomic: a refused run never truncates an earlier report", async () =>
 });
 
 Deno.test("registry pin: a mismatching hash is refused, the right one accepted", async () => {
-  const bad = await plan(["data/demo/01-reservoir-outlet.yaml", "--registry-hash", "0".repeat(64), "--no-monte-carlo"]);
+  const bad = await plan([
+    "data/demo/01-reservoir-outlet.yaml",
+    "--registry-hash",
+    "0".repeat(64),
+    "--no-monte-carlo",
+  ]);
   assert.equal(bad.code, 2);
   assert.match(bad.stderr, /--registry-hash/);
   assert.equal(bad.stdout, "");
-  const good = await plan(["data/demo/01-reservoir-outlet.yaml", "--registry-hash", defaultRegistry().hash, "--no-monte-carlo"]);
+  const good = await plan([
+    "data/demo/01-reservoir-outlet.yaml",
+    "--registry-hash",
+    defaultRegistry().hash,
+    "--no-monte-carlo",
+  ]);
   assert.equal(good.code, 0, good.stderr);
 });
 
@@ -110,7 +133,12 @@ Deno.test("beyond the critical angle: exit 1, one line naming the angle", async 
 });
 
 Deno.test("readings: the invented demo readings reconcile to a named cause", async () => {
-  const r = await plan(["data/demo/02-pump-station-bends.yaml", "--readings", "data/demo/readings/twv-02-readings.yaml", "--json"]);
+  const r = await plan([
+    "data/demo/02-pump-station-bends.yaml",
+    "--readings",
+    "data/demo/readings/twv-02-readings.yaml",
+    "--json",
+  ]);
   assert.equal(r.code, 0, r.stderr);
   const x = JSON.parse(r.stdout);
   assert.ok(x.mountings[0].causes.length > 0);
@@ -118,10 +146,20 @@ Deno.test("readings: the invented demo readings reconcile to a named cause", asy
 });
 
 Deno.test(
-  { name: "HTML report renders in headless chromium with no console errors", ignore: !hasChromium() },
+  {
+    name: "HTML report renders in headless chromium with no console errors",
+    ignore: !hasChromium(),
+  },
   async () => {
     const dir = await Deno.makeTempDir();
-    const r = await plan(["data/demo/03-lined-trunk-main.yaml", "--format", "html", "--out", dir, "--quiet"]);
+    const r = await plan([
+      "data/demo/03-lined-trunk-main.yaml",
+      "--format",
+      "html",
+      "--out",
+      dir,
+      "--quiet",
+    ]);
     assert.equal(r.code, 0, r.stderr);
     const page = [...Deno.readDirSync(dir)].find((e) => e.name.startsWith("twv-03"))!.name;
     const shown = await renderHtml({ file: `${dir}/${page}` });

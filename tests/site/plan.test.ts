@@ -30,7 +30,9 @@ function walkFinite(x: unknown, path = "plan"): void {
 }
 
 Deno.test("every demo site plans, with every number finite and the required fields present", async () => {
-  const files = [...Deno.readDirSync(DEMO)].filter((e) => e.name.endsWith(".yaml")).map((e) => e.name);
+  const files = [...Deno.readDirSync(DEMO)].filter((e) => e.name.endsWith(".yaml")).map((e) =>
+    e.name
+  );
   assert.ok(files.length >= 4);
   for (const f of files) {
     const site = await readSiteFile(new URL(f, DEMO).pathname);
@@ -69,7 +71,9 @@ Deno.test("hand derivation: spacing = N·D·tanθf + 2·t·tanθw with Snell's l
   const cw = 2720, aw = 38 * Math.PI / 180;
   const s = Math.sin(aw) / cw; // Snell invariant
   const thf = Math.asin(s * p.fluid.soundSpeed);
-  const wallSpeed = p.mountings[0].wallMode === "shear" ? defaultRegistry().material("carbon-steel").shear! : p.pipe.wallSoundSpeed;
+  const wallSpeed = p.mountings[0].wallMode === "shear"
+    ? defaultRegistry().material("carbon-steel").shear!
+    : p.pipe.wallSoundSpeed;
   const thw = Math.asin(s * wallSpeed);
   for (const m of p.mountings) {
     const expected = m.traverses * p.pipe.boreDiameter * Math.tan(thf) +
@@ -116,7 +120,10 @@ Deno.test("GUM and Monte Carlo agree on the plan's nearly linear model", async (
 
 Deno.test("a longer straight run never raises the expanded uncertainty", async () => {
   const site = (len: string) =>
-    readSiteText(BASE + `run: { length: ${len}, upstream: { fitting: elbow-90 }, downstream: { fitting: gate-valve } }\n`);
+    readSiteText(
+      BASE +
+        `run: { length: ${len}, upstream: { fitting: elbow-90 }, downstream: { fitting: gate-valve } }\n`,
+    );
   let prev = Infinity;
   for (const len of ["1 m", "2 m", "4 m", "8 m"]) {
     const p = planSite(await site(len), { monteCarlo: false });
@@ -132,7 +139,12 @@ Deno.test("common practice as check values: elbow with 10 D up and 5 D down meet
   const D = p0.pipe.boreDiameter;
   const p = planSite(
     await readSiteText(
-      BASE + `run: { length: ${(15 * D).toFixed(4)} m, upstream: { fitting: elbow-90 }, downstream: { fitting: gate-valve }, plannedPosition: ${(10 * D).toFixed(4)} m }\n`,
+      BASE +
+        `run: { length: ${
+          (15 * D).toFixed(4)
+        } m, upstream: { fitting: elbow-90 }, downstream: { fitting: gate-valve }, plannedPosition: ${
+          (10 * D).toFixed(4)
+        } m }\n`,
     ),
     { monteCarlo: false },
   );
@@ -140,7 +152,10 @@ Deno.test("common practice as check values: elbow with 10 D up and 5 D down meet
   closeAbs(p.straightRun!.upstreamDiameters, 10, 1e-3);
   const short = planSite(
     await readSiteText(
-      BASE + `run: { length: ${(8 * D).toFixed(4)} m, upstream: { fitting: elbow-90 }, downstream: { fitting: gate-valve } }\n`,
+      BASE +
+        `run: { length: ${
+          (8 * D).toFixed(4)
+        } m, upstream: { fitting: elbow-90 }, downstream: { fitting: gate-valve } }\n`,
     ),
     { monteCarlo: false },
   );
@@ -149,10 +164,14 @@ Deno.test("common practice as check values: elbow with 10 D up and 5 D down meet
 });
 
 Deno.test("target verdict: generous target reachable, impossible one not, with suggestions", async () => {
-  const easy = planSite(await readSiteText(BASE + "targetUncertainty: 20 %\n"), { monteCarlo: false });
+  const easy = planSite(await readSiteText(BASE + "targetUncertainty: 20 %\n"), {
+    monteCarlo: false,
+  });
   assert.equal(easy.target!.reachable, true);
   assert.equal(easy.target!.suggestions.length, 0);
-  const hard = planSite(await readSiteText(BASE + "targetUncertainty: 0.1 %\n"), { monteCarlo: false });
+  const hard = planSite(await readSiteText(BASE + "targetUncertainty: 0.1 %\n"), {
+    monteCarlo: false,
+  });
   assert.equal(hard.target!.reachable, false);
   assert.ok(hard.target!.suggestions.length > 0);
   assert.ok(hard.target!.worstExpanded > 0.001);
@@ -173,11 +192,26 @@ Deno.test("measuring the wall and taping the circumference lowers the uncertaint
 });
 
 Deno.test("refusals: unknown material, boiling water, beyond the critical angle", async () => {
-  await assert.rejects(async () => planSite(await readSiteText(BASE.replace("carbon-steel", "unobtainium")), { monteCarlo: false }), InputError);
-  const boiling = BASE.replace("temperature: 20 degC, pressure: 3 bar", "temperature: 150 degC, pressure: 2 bar");
-  await assert.rejects(async () => planSite(await readSiteText(boiling), { monteCarlo: false }), NoPhysicalAnswerError);
+  await assert.rejects(
+    async () =>
+      planSite(await readSiteText(BASE.replace("carbon-steel", "unobtainium")), {
+        monteCarlo: false,
+      }),
+    InputError,
+  );
+  const boiling = BASE.replace(
+    "temperature: 20 degC, pressure: 3 bar",
+    "temperature: 150 degC, pressure: 2 bar",
+  );
+  await assert.rejects(
+    async () => planSite(await readSiteText(boiling), { monteCarlo: false }),
+    NoPhysicalAnswerError,
+  );
   const steep = BASE.replace("wedgeAngle: 38 deg", "wedgeAngle: 80 deg");
-  await assert.rejects(async () => planSite(await readSiteText(steep), { monteCarlo: false }), NoPhysicalAnswerError);
+  await assert.rejects(
+    async () => planSite(await readSiteText(steep), { monteCarlo: false }),
+    NoPhysicalAnswerError,
+  );
 });
 
 Deno.test("plans are reproducible bit for bit (seeded Monte Carlo)", async () => {

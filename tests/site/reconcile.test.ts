@@ -22,7 +22,9 @@ Deno.test("the plan's own zero-flow time reconciles, with the registry's sound s
   const site = await readSiteText(SITE);
   const plan = planSite(site, { monteCarlo: false });
   const m = plan.mountings[0];
-  const r = reconcile(site, { mountings: [{ traverses: 2, totalTime: m.totalTime + 8e-6, fixedDelay: 8e-6 }] });
+  const r = reconcile(site, {
+    mountings: [{ traverses: 2, totalTime: m.totalTime + 8e-6, fixedDelay: 8e-6 }],
+  });
   const x = r.mountings[0];
   assert.ok(x.consistent);
   closeRel(x.inferredSoundSpeed, plan.fluid.soundSpeed, 1e-9, "inferred speed");
@@ -49,17 +51,24 @@ Deno.test("measured temperature given: the same reading then reconciles", async 
   const site = await readSiteText(SITE);
   const warm = await readSiteText(SITE.replace("15 degC", "23 degC"));
   const time = planSite(warm, { monteCarlo: false }).mountings[0].totalTime;
-  const r = reconcile(site, { temperature: 296.15, mountings: [{ traverses: 2, totalTime: time }] });
+  const r = reconcile(site, {
+    temperature: 296.15,
+    mountings: [{ traverses: 2, totalTime: time }],
+  });
   assert.ok(r.mountings[0].consistent);
 });
 
 Deno.test("a thicker wall (deposits) than planned: wall-or-lining sized correctly", async () => {
   const site = await readSiteText(SITE);
   const plan = planSite(site, { monteCarlo: false });
-  const thick = await readSiteText(SITE.replace("mountings: [2]", "mountings: [2]").replace(
-    `material: carbon-steel }`,
-    `material: carbon-steel, measuredWallThickness: ${(plan.pipe.wallThickness * 1000 + 3).toFixed(3)} mm }`,
-  ));
+  const thick = await readSiteText(
+    SITE.replace("mountings: [2]", "mountings: [2]").replace(
+      `material: carbon-steel }`,
+      `material: carbon-steel, measuredWallThickness: ${
+        (plan.pipe.wallThickness * 1000 + 3).toFixed(3)
+      } mm }`,
+    ),
+  );
   const time = planSite(thick, { monteCarlo: false }).mountings[0].totalTime;
   const r = reconcile(site, { mountings: [{ traverses: 2, totalTime: time }] });
   const x = r.mountings[0];

@@ -1,0 +1,146 @@
+/**
+ * Whole-command wall time of the quick scripts, each as a ratio to a bare `deno eval 0` started
+ * the same way (same flags), medians of several runs taken in turn. Run with --help.
+ *
+ * @module
+ */
+import { InputError } from "../lib/errors.ts";
+import { parseCli, runMain } from "./_cli.ts";
+
+const HELP = `
+bench_commands — wall time of whole commands as a ratio to bare Deno start-up
+
+Usage:
+  deno task bench:commands [--runs 9] [--json]
+
+Options:
+  --runs N     runs of each command, taken in turn (default 9, at least 7); medians reported
+  --json       machine-readable output
+  -h, --help   this help
+
+Times each command as a child process from spawn to exit. The baseline is 'deno eval 0' with the
+same flags. A command whose script does not exist yet is skipped with a notice.
+`;
+
+const FLAGS = ["--ignore-env=LOG_TOKENS,LOG_STREAM", "--allow-read=."];
+
+interface Case {
+  name: string;
+  args: string[];
+  /** The script file that must exist. */
+  script?: string;
+  /** Goal: at most this many times bare start-up. */
+  goal?: number;
+}
+
+const CASES: Case[] = [
+  { name: "bare start-up: deno eval 0", args: ["eval", ...FLAGS, "0"] },
+  {
+    name: "spacing.ts, raw figures, --json",
+    script: "scripts/spacing.ts",
+    goal: 2,
+    args: [
+      "run",
+      ...FLAGS,
+      "scripts/spacing.ts",
+      "--od",
+      "114.3 mm",
+      "--wall",
+      "6.02 mm",
+      "--wall-speed",
+      "5920 m/s",
+      "--wall-shear-speed",
+      "3230 m/s",
+      "--fluid-speed",
+      "1482 m/s",
+      "--wedge-speed",
+      "2720 m/s",
+      "--wedge-angle",
+      "38 deg",
+      "--json",
+    ],
+  },
+  {
+    name: "plan.ts, one invented site, --format json",
+    script: "scripts/plan.ts",
+    goal: 4,
+    args: [
+      "run",
+      ...FLAGS,
+      "scripts/plan.ts",
+      "data/demo/01-reservoir-outlet.yaml",
+      "--format",
+      "json",
+    ],
+  },
+];
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
+}
+
+async function timeOnce(args: string[]): Promise<{ ms: number; ok: boolean; err: string }> {
+  const t0 = performance.now();
+  const out = await new Deno.Command(Deno.execPath(), { args, stdout: "null", stderr: "piped" })
+    .output();
+  const ms = performance.now() - t0;
+  return { ms, ok: out.success, err: new TextDecoder().decode(out.stderr).trim().split("\n")[0] };
+}
+
+function exists(path: string): boolean {
+  try {
+    return Deno.statSync(path).isFile;
+  } catch {
+    return false;
+  }
+}
+
+runMain(async () => {
+  const { values } = parseCli(Deno.args, { runs: { type: "string" } }, HELP);
+  const runs = values.runs === undefined ? 9 : Number(values.runs);
+  if (!Number.isInteger(runs) || runs < 7) {
+    throw new InputError("--runs", String(values.runs), "an integer >= 7");
+  }
+  const notices: string[] = [];
+  const cases = CASES.filter((c) => {
+    if (!c.script || exists(c.script)) return true;
+    notices.push(`${c.script} not found: "${c.name}" skipped`);
+    return false;
+  });
+  // One warm-up each (module cache, type-check cache), then runs taken in turn.
+  for (const c of cases) {
+    const r = await timeOnce(c.args);
+    if (!r.ok) throw new Error(`"${c.name}" failed: ${r.err}`);
+  }
+  const times: number[][] = cases.map(() => []);
+  for (let r = 0; r < runs; r++) {
+    for (let i = 0; i < cases.length; i++) times[i].push((await timeOnce(cases[i].args)).ms);
+  }
+  const base = median(times[0]);
+  const rows = cases.map((c, i) => {
+    const ms = median(times[i]);
+    const ratio = ms / base;
+    return {
+      name: c.name,
+      medianMs: ms,
+      ratio,
+      goal: c.goal ?? null,
+      met: c.goal === undefined ? null : ratio <= c.goal,
+    };
+  });
+  if (values.json) {
+    console.log(JSON.stringify({ runs, rows, notices }, null, 2));
+    return 0;
+  }
+  for (const n of notices) console.log(`notice: ${n}`);
+  console.log(`medians of ${runs} runs taken in turn; ratio = command / bare start-up\n`);
+  for (const r of rows) {
+    const goal = r.goal === null ? "" : `  (goal <= ${r.goal}x: ${r.met ? "met" : "not met"})`;
+    console.log(
+      `${r.name.padEnd(44)} ${r.medianMs.toFixed(0).padStart(6)} ms  ${r.ratio.toFixed(2)}x${goal}`,
+    );
+  }
+  return 0;
+});
