@@ -170,6 +170,11 @@ export function gumPropagate(
         );
       }
       c[i] = (up - down) / (2 * h);
+      if (!Number.isFinite(c[i])) {
+        throw new NoPhysicalAnswerError(
+          `the model's slope in ${inputs[i].name} overflows within ±${h} of ${xi}`,
+        );
+      }
     }
   }
 

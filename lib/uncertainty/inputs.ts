@@ -131,7 +131,11 @@ export function correlationMatrix(
   inputs: readonly UncertainInput[],
   correlations: readonly Correlation[] | undefined,
 ): Float64Array | undefined {
-  if (correlations === undefined || correlations.length === 0) return undefined;
+  if (correlations === undefined) return undefined;
+  if (!Array.isArray(correlations)) {
+    throw new InputError("correlations", describe(correlations), "a list of { a, b, r }");
+  }
+  if (correlations.length === 0) return undefined;
   const n = inputs.length;
   const index = new Map(inputs.map((inp, i) => [inp.name, i]));
   const m = new Float64Array(n * n);
@@ -144,7 +148,7 @@ export function correlationMatrix(
     if (ib === undefined) throw new InputError(`${where}.b`, describe(c?.b), "an input's name");
     if (ia === ib) throw new InputError(where, `${c.a} with itself`, "two different inputs");
     if (typeof c.r !== "number" || !(c.r >= -1 && c.r <= 1)) {
-      throw new InputError(`${where}.r`, String(c.r), "a number from −1 to 1");
+      throw new InputError(`${where}.r`, describe(c.r), "a number from −1 to 1");
     }
     const key = ia < ib ? `${ia},${ib}` : `${ib},${ia}`;
     if (pairs.has(key)) throw new InputError(where, `${c.a}–${c.b} again`, "each pair once");

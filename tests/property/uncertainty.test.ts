@@ -10,15 +10,18 @@ import { gumPropagate, type UncertainInput } from "../../lib/uncertainty/mod.ts"
 import { outcome, RUNS, Tally } from "./_check.ts";
 
 const range = (min: number, max: number) => fc.double({ min, max, noNaN: true });
+/** A number on a grid of 1e-4 of its range (no magnitudes near underflow). */
+const grid = (min: number, max: number) =>
+  fc.integer({ min: 0, max: 10_000 }).map((i) => min + (max - min) * i / 10_000);
 const DISTS = ["normal", "rectangular", "triangular", "u-shaped"] as const;
 
 const linear = fc.record({
-  a0: range(-100, 100),
+  a0: grid(-100, 100),
   terms: fc.array(
     fc.record({
-      a: range(-10, 10),
-      x: range(-100, 100),
-      u: range(0.01, 10),
+      a: grid(-10, 10),
+      x: grid(-100, 100),
+      u: grid(0.01, 10),
       dist: fc.constantFrom(...DISTS),
     }),
     { minLength: 1, maxLength: 8 },
@@ -52,7 +55,9 @@ Deno.test("uncertainty property: GUM on linear models equals the root-sum-square
       assert.equal(r.coverageFactor, 2);
       assert.ok(Math.abs(r.expanded - 2 * r.standardUncertainty) <= 1e-15 * r.expanded);
       const shares = r.budget.reduce((s, b) => s + b.share, 0);
-      assert.ok(rss < 1e-150 || Math.abs(shares - 1) < 1e-9, `shares add to ${shares}`);
+      // (When every c·u underflows or is lost in y's rounding, u(y) is 0 and so are the shares.)
+      const none = r.standardUncertainty < 1e-140;
+      assert.ok(none || Math.abs(shares - 1) < 1e-9, `shares add to ${shares}`);
     }),
     RUNS,
   );
@@ -62,10 +67,10 @@ Deno.test("uncertainty property: GUM on linear models equals the root-sum-square
 Deno.test("uncertainty property: full correlation adds or cancels linearly (eq. 16)", () => {
   fc.assert(
     fc.property(
-      range(-10, 10),
-      range(-10, 10),
-      range(0.01, 10),
-      range(0.01, 10),
+      grid(-10, 10),
+      grid(-10, 10),
+      grid(0.01, 10),
+      grid(0.01, 10),
       fc.constantFrom(1, -1),
       (a1, a2, u1, u2, r) => {
         const res = gumPropagate(
@@ -76,7 +81,7 @@ Deno.test("uncertainty property: full correlation adds or cancels linearly (eq. 
         const expect = Math.abs(a1 * u1 + r * a2 * u2);
         assert.ok(
           Math.abs(res.standardUncertainty - expect) <=
-            1e-9 * (Math.abs(a1 * u1) + Math.abs(a2 * u2)),
+            1e-9 * (Math.abs(a1 * u1) + Math.abs(a2 * u2)) + 1e-300,
           `r ${r}: ${res.standardUncertainty} vs ${expect}`,
         );
       },
