@@ -8,7 +8,7 @@ import { parse as parseYaml } from "yaml";
 import { InputError, SnellpathError } from "../lib/errors.ts";
 import { parseQuantityFull } from "../lib/units.ts";
 import { defaultRegistry } from "../lib/registry/mod.ts";
-import { readSiteFile, readSitesCsvFile, siteFiles } from "../lib/site/read.ts";
+import { readSiteFile, readSitesCsvText, siteFiles, streamSitesCsv } from "../lib/site/read.ts";
 import type { SiteInput } from "../lib/site/schema.ts";
 import { planSite, type SitePlan } from "../lib/site/plan.ts";
 import { type FieldReadings, reconcile } from "../lib/site/reconcile.ts";
@@ -155,6 +155,13 @@ async function readReadings(path: string): Promise<FieldReadings> {
 
 type Source = { kind: "file"; path: string } | { kind: "csv"; path: string };
 
+/** A refused CSV row: its message already names the file, row and field. */
+class RowError extends SnellpathError {
+  constructor(message: string) {
+    super(message, 2);
+  }
+}
+
 async function main(): Promise<number> {
   const { values, positionals } = parseCli(Deno.args, {
     format: { type: "string" },
@@ -259,7 +266,11 @@ async function main(): Promise<number> {
     if (error || !site) {
       refused++;
       worstCode = Math.max(worstCode, error?.exitCode ?? 2);
-      console.error(`error: ${label}: ${error?.message ?? "refused"}`);
+      console.error(
+        error instanceof RowError
+          ? `error: ${error.message}`
+          : `error: ${label}: ${error?.message ?? "refused"}`,
+      );
       summary.push({ id: label, name: label, error: error?.message ?? "refused" });
       return;
     }
@@ -301,17 +312,13 @@ async function main(): Promise<number> {
 
   for (const src of sources) {
     if (src.kind === "csv") {
-      const { sites, errors } = await readSitesCsvFile(src.path);
-      for (const e of errors) {
-        await handle(
-          undefined,
-          `${src.path} row ${e.row}`,
-          new InputError(`row ${e.row}`, "", e.message),
-        );
-      }
-      for (const s of sites) {
-        await handle(s, `${src.path} row ${s.source.row}`);
-        progress(sites.length + errors.length);
+      const text = await readSitesCsvText(src.path);
+      for await (const r of streamSitesCsv(text, { file: src.path })) {
+        if ("site" in r) await handle(r.site, `${src.path} row ${r.site.source.row}`);
+        else {
+          await handle(undefined, `${src.path} row ${r.error.row}`, new RowError(r.error.message));
+        }
+        progress(undefined);
       }
     } else {
       try {

@@ -373,6 +373,10 @@ export function profileFactorEstimate(
   options?: ProfileOptions,
 ): ProfileFactorEstimate {
   requireFinite("reynolds", reynolds, "1", true);
+  // An unknown model name is refused (it used to fall back silently to power-law-friction).
+  if (options?.model !== undefined && !["laminar", ...TURBULENT_MODELS].includes(options.model)) {
+    badModel(options.model);
+  }
   const c = flowConstants();
   const warnings: Warning[] = [];
   const regime = flowRegime(reynolds);

@@ -159,7 +159,7 @@ export function profileErrorEstimate(input: ProfileErrorInput): ProfileErrorResu
     extrapolate: true,
   });
   const k = 1 / chordMeanVelocity(shape, h);
-  const comp = pathIntegral(fit, x0, alpha, nTrav, h, phi);
+  const comp = memoPathIntegral(fit, x0, alpha, nTrav, h, phi);
   const components: ErrorComponents = Object.freeze({
     axisymmetric: k * comp[0],
     secondHarmonic: k * comp[1],
@@ -189,8 +189,59 @@ export function profileErrorEstimate(input: ProfileErrorInput): ProfileErrorResu
 }
 
 const OUT = new Float64Array(5);
+const NODES = 2 * RULE.s.length;
+/** Per quadrature point (both sides): t and weight, precomputed once. */
+const T_NODE = new Float64Array(NODES);
+const W_NODE = new Float64Array(NODES);
+for (let i = 0; i < RULE.s.length; i++) {
+  T_NODE[2 * i] = -RULE.s[i];
+  T_NODE[2 * i + 1] = RULE.s[i];
+  W_NODE[2 * i] = W_NODE[2 * i + 1] = RULE.w[i];
+}
+/** Scratch: exp(−step·(t+1)/2 / decay) per component and node, reused between calls. */
+const DECAY_ALONG = new Float64Array(5 * NODES);
+let cachedStep = NaN;
+let cachedDist: Fitting["disturbance"] | undefined;
 
-/** Path means of the five distortion terms (already multiplied out by the transverse cot φ). */
+function componentsOf(dist: Fitting["disturbance"]) {
+  return [dist.axisymmetric, dist.secondHarmonic, dist.skew, dist.swirl, dist.crossFlow] as const;
+}
+
+/** The last path integral's inputs and result: ranking calls it for several Reynolds numbers
+ * in a row with the same geometry, and the components do not depend on Re. */
+const MEMO = new Float64Array(5);
+let memoFit: Fitting | undefined;
+let memoKey = [NaN, NaN, NaN, NaN, NaN];
+
+function memoPathIntegral(
+  fit: Fitting,
+  xMid: number,
+  alpha: number,
+  nTrav: number,
+  h: number,
+  phi: number,
+): Float64Array {
+  if (
+    fit === memoFit && xMid === memoKey[0] && alpha === memoKey[1] && nTrav === memoKey[2] &&
+    h === memoKey[3] && phi === memoKey[4]
+  ) {
+    return MEMO;
+  }
+  MEMO.set(pathIntegral(fit, xMid, alpha, nTrav, h, phi));
+  memoFit = fit;
+  memoKey = [xMid, alpha, nTrav, h, phi];
+  return MEMO;
+}
+
+/**
+ * Path means of the five distortion terms (already multiplied out by the transverse cot φ).
+ *
+ * Each component decays as A·exp(−x/L). Along one traverse x = x₀ + step·(t+1)/2, so the
+ * exponential factors into exp(−x₀/L) (one per traverse) times exp(−step·(t+1)/(2L)) (one per
+ * node, cached while the fitting and the step stay the same): the same sums as point by point,
+ * with far fewer exponentials. Where part of the path lies before the fitting (x < 0, clamped to
+ * 0) the point-by-point form is used.
+ */
 function pathIntegral(
   fit: Fitting,
   xMid: number,
@@ -201,33 +252,64 @@ function pathIntegral(
 ): Float64Array {
   OUT.fill(0);
   const dist = fit.disturbance;
+  const comps = componentsOf(dist);
   const g = Math.sqrt(1 - h * h);
   const step = g * Math.tan(phi); // axial advance per traverse, D
   const cot = 1 / Math.tan(phi);
   const gamma = Math.acos(h);
   const xStart = xMid - nTrav * step / 2;
-  const { s, w } = RULE;
+  const factored = xStart >= 0;
+  if (factored && (step !== cachedStep || dist !== cachedDist)) {
+    for (let c = 0; c < 5; c++) {
+      const d = comps[c].decay;
+      for (let j = 0; j < NODES; j++) {
+        DECAY_ALONG[c * NODES + j] = Math.exp(-step * (T_NODE[j] + 1) / 2 / d);
+      }
+    }
+    cachedStep = step;
+    cachedDist = dist;
+  }
+  const a0 = comps[0].amplitude, a1 = comps[1].amplitude, a2 = comps[2].amplitude;
+  const a3 = comps[3].amplitude, a4 = comps[4].amplitude;
   for (let kk = 0; kk < nTrav; kk++) {
     const beta = alpha - Math.PI / 2 + 2 * kk * gamma; // chord normal angle
     const nx = Math.cos(beta);
     const ny = Math.sin(beta);
     const ex = -ny; // travel direction: normal turned +90°
     const ey = nx;
-    for (let i = 0; i < s.length; i++) {
-      for (let side = -1; side <= 1; side += 2) {
-        const t = side * s[i];
-        const px = h * nx + t * g * ex;
-        const py = h * ny + t * g * ey;
-        const r2 = px * px + py * py;
-        const om = 1 - r2;
-        const x = xStart + step * (kk + (t + 1) / 2);
-        const wt = w[i] / 2 / nTrav;
-        OUT[0] += wt * amp(dist.axisymmetric, x) * om * (1 - 3 * r2);
-        OUT[1] += wt * amp(dist.secondHarmonic, x) * (px * px - py * py) * om;
-        OUT[2] += wt * amp(dist.skew, x) * px * om;
-        OUT[3] += wt * amp(dist.swirl, x) * h * (1 - r2 * r2) * cot;
-        OUT[4] += wt * amp(dist.crossFlow, x) * om * ex * cot;
+    const x0 = xStart + step * kk;
+    const e0 = factored && a0 !== 0 ? a0 * Math.exp(-x0 / comps[0].decay) : 0;
+    const e1 = factored && a1 !== 0 ? a1 * Math.exp(-x0 / comps[1].decay) : 0;
+    const e2 = factored && a2 !== 0 ? a2 * Math.exp(-x0 / comps[2].decay) : 0;
+    const e3 = factored && a3 !== 0 ? a3 * Math.exp(-x0 / comps[3].decay) : 0;
+    const e4 = factored && a4 !== 0 ? a4 * Math.exp(-x0 / comps[4].decay) : 0;
+    for (let j = 0; j < NODES; j++) {
+      const t = T_NODE[j];
+      const px = h * nx + t * g * ex;
+      const py = h * ny + t * g * ey;
+      const r2 = px * px + py * py;
+      const om = 1 - r2;
+      const wt = W_NODE[j] / 2 / nTrav;
+      let m0: number, m1: number, m2: number, m3: number, m4: number;
+      if (factored) {
+        m0 = e0 * DECAY_ALONG[j];
+        m1 = e1 * DECAY_ALONG[NODES + j];
+        m2 = e2 * DECAY_ALONG[2 * NODES + j];
+        m3 = e3 * DECAY_ALONG[3 * NODES + j];
+        m4 = e4 * DECAY_ALONG[4 * NODES + j];
+      } else {
+        const x = x0 + step * (t + 1) / 2;
+        m0 = amp(comps[0], x);
+        m1 = amp(comps[1], x);
+        m2 = amp(comps[2], x);
+        m3 = amp(comps[3], x);
+        m4 = amp(comps[4], x);
       }
+      OUT[0] += wt * m0 * om * (1 - 3 * r2);
+      OUT[1] += wt * m1 * (px * px - py * py) * om;
+      OUT[2] += wt * m2 * px * om;
+      OUT[3] += wt * m3 * h * (1 - r2 * r2) * cot;
+      OUT[4] += wt * m4 * om * ex * cot;
     }
   }
   return OUT;

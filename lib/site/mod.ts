@@ -8,12 +8,14 @@ export {
   readSiteFile,
   readSitesCsv,
   readSitesCsvFile,
+  readSitesCsvText,
   readSiteText,
   SITE_LIMITS,
   siteFiles,
   SiteInputError,
+  streamSitesCsv,
 } from "./read.ts";
-export type { ReadSiteOptions, SitesCsvResult } from "./read.ts";
+export type { ReadSiteOptions, SitesCsvResult, SitesCsvRow } from "./read.ts";
 export type * from "./schema.ts";
 export {
   type MountingPlan,

@@ -201,19 +201,58 @@ export async function readSitesCsv(
   text: string,
   options: { file?: string } = {},
 ): Promise<SitesCsvResult> {
+  const sites: SiteInput[] = [];
+  const errors: { row: number; message: string }[] = [];
+  for await (const r of streamSitesCsv(text, options)) {
+    if ("site" in r) sites.push(r.site);
+    else errors.push(r.error);
+  }
+  return { sites, errors };
+}
+
+/** One row of {@link streamSitesCsv}: a site, or a refused row. */
+export type SitesCsvRow =
+  | { readonly site: SiteInput }
+  | { readonly error: { row: number; message: string } };
+
+/**
+ * Read a fleet from CSV text one row at a time, so that a large fleet is planned without
+ * holding every site: yields each site (or a refused row with its line and message) in row
+ * order. Same rules as {@link readSitesCsv}; a bad header or a CSV syntax error throws before
+ * the first row.
+ *
+ * @param text the CSV text
+ * @param options file name for messages
+ * @returns an async iterator of rows
+ * @throws {SiteInputError} for a bad header, a CSV syntax error, an empty or oversized text
+ *
+ * @example
+ * ```ts
+ * import { streamSitesCsv } from "./read.ts";
+ * const csv = "id,name,pipe.nps,pipe.schedule,fluid.liquid,fluid.temperature,flow.minimum," +
+ *   "flow.maximum,transducer.wedgeSoundSpeed,transducer.wedgeAngle,transducer.frequency\n" +
+ *   "A1,Pump house (invented),6,40,water,15 degC,5 L/s,40 L/s,2720 m/s,38 deg,1 MHz\n";
+ * let n = 0;
+ * for await (const r of streamSitesCsv(csv)) if ("site" in r) n++;
+ * if (n !== 1) throw new Error();
+ * ```
+ */
+export async function* streamSitesCsv(
+  text: string,
+  options: { file?: string } = {},
+): AsyncGenerator<SitesCsvRow> {
   const label = options.file ?? "<csv>";
   const ctx: Ctx = { file: options.file };
   const t = checkText(ctx, text, MAX_SITES_CSV_BYTES);
   const records = splitCsv(ctx, t);
   if (records.length === 0) fail(ctx, "file", "no header", "a header of dotted site keys");
-  const [head, ...rows] = records;
-  const paths = checkHeader(ctx, head.cells);
+  const paths = checkHeader(ctx, records[0].cells);
   const idCol = paths.findIndex((p) => p.length === 1 && p[0] === "id");
-  const sites: SiteInput[] = [];
-  const errors: { row: number; message: string }[] = [];
   const ids = new Map<string, number>();
-  for (const rec of rows) {
+  for (let i = 1; i < records.length; i++) {
+    const rec = records[i];
     const rowCtx: Ctx = { file: `${label} row ${rec.line}` };
+    let site: SiteInput;
     try {
       if (rec.cells.length > paths.length) {
         fail(rowCtx, "row", `${rec.cells.length} cells`, `at most ${paths.length}, one per column`);
@@ -226,13 +265,14 @@ export async function readSitesCsv(
       }
       ids.set(id, rec.line);
       const raw = nestRow(paths, rec.cells);
-      sites.push(await buildSite(raw, { file: label, format: "csv", row: rec.line }, rowCtx));
+      site = await buildSite(raw, { file: label, format: "csv", row: rec.line }, rowCtx);
     } catch (e) {
       if (!(e instanceof SnellpathError)) throw e;
-      errors.push({ row: rec.line, message: e.message });
+      yield { error: { row: rec.line, message: e.message } };
+      continue;
     }
+    yield { site };
   }
-  return { sites, errors };
 }
 
 /**
@@ -254,10 +294,21 @@ export async function readSitesCsv(
  * ```
  */
 export async function readSitesCsvFile(path: string): Promise<SitesCsvResult> {
+  return await readSitesCsv(await readSitesCsvText(path), { file: path });
+}
+
+/**
+ * Read the text of a fleet CSV file (at most 4 MiB, size checked before reading; binary
+ * refused), for {@link streamSitesCsv}.
+ *
+ * @param path the file's path
+ * @returns the text
+ * @throws {SiteInputError} for a missing, oversized or binary file
+ */
+export async function readSitesCsvText(path: string): Promise<string> {
   const ctx: Ctx = { file: path };
   const bytes = await readBytes(ctx, path, MAX_SITES_CSV_BYTES);
-  const text = decodeText(ctx, bytes, MAX_SITES_CSV_BYTES);
-  return await readSitesCsv(text, { file: path });
+  return decodeText(ctx, bytes, MAX_SITES_CSV_BYTES);
 }
 
 /**

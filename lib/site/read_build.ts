@@ -55,8 +55,9 @@ export const LIMITS = {
   salinity: { min: 0, max: 100, unit: "" },
   density: { min: 1, max: 30000, unit: "kg/m^3" },
   kinematicViscosity: { min: 1e-9, max: 1, unit: "mm^2/s" },
-  flowRate: { min: 0, max: 1000, unit: "m^3/s", minOpen: true },
-  velocity: { min: 0, max: 100, unit: "m/s", minOpen: true },
+  // Floors far below any real flow: a rate of 1e-320 m³/s would make Re and 64/Re overflow.
+  flowRate: { min: 1e-12, max: 1000, unit: "m^3/s", minOpen: true },
+  velocity: { min: 1e-9, max: 100, unit: "m/s", minOpen: true },
   wedgeAngle: { min: 0, max: Math.PI / 2, unit: "deg", minOpen: true, maxOpen: true },
   frequency: { min: 1e3, max: 1e8, unit: "kHz" },
   timingResolution: { min: 0, max: 1e-3, unit: "ns", minOpen: true },

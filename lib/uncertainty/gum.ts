@@ -68,7 +68,7 @@ export interface GumResult {
   readonly value: number;
   /** Combined standard uncertainty u_c(y). */
   readonly standardUncertainty: number;
-  /** u_c(y)/|y|; undefined when y = 0. */
+  /** u_c(y)/|y|; undefined when y = 0 (or so near 0 that the ratio overflows). */
   readonly relativeStandardUncertainty: number | undefined;
   /** Welch–Satterthwaite ν_eff, when some input has finite degrees of freedom. */
   readonly effectiveDegreesOfFreedom?: number;
@@ -192,15 +192,22 @@ export function gumPropagate(
   }
   const total = Math.max(variance + correlationVariance, 0);
   const uc = Math.sqrt(total);
+  if (!Number.isFinite(uc)) {
+    throw new NoPhysicalAnswerError(
+      `the combined standard uncertainty overflows (a sensitivity × uncertainty near 1e154)`,
+    );
+  }
 
   let nuEff: number | undefined;
   if (inputs.some((inp) => inp.degreesOfFreedom !== undefined && inp.degreesOfFreedom < Infinity)) {
+    // ν_eff = u⁴(y) / Σ (c_i u_i)⁴/ν_i, evaluated as 1 / Σ (c_i u_i / u(y))⁴/ν_i so that the
+    // fourth powers cannot overflow; an infinite ν_eff is left undefined (as infinite).
     let denom = 0;
     for (let i = 0; i < n; i++) {
       const nu = inputs[i].degreesOfFreedom;
-      if (nu !== undefined && nu < Infinity) denom += cu[i] ** 4 / nu;
+      if (nu !== undefined && nu < Infinity && uc > 0) denom += (cu[i] / uc) ** 4 / nu;
     }
-    if (denom > 0) nuEff = (uc ** 4) / denom;
+    if (denom > 0 && Number.isFinite(1 / denom)) nuEff = 1 / denom;
   }
 
   let k: number;
@@ -240,7 +247,9 @@ export function gumPropagate(
   });
   budget.sort((a, b) => b.contribution - a.contribution);
 
-  const rel = y !== 0 ? uc / Math.abs(y) : undefined;
+  // Undefined when y = 0, or when y is so near 0 (5e-324) that u/|y| overflows.
+  const r0 = uc / Math.abs(y);
+  const rel = y !== 0 && Number.isFinite(r0) && Number.isFinite(k * r0) ? r0 : undefined;
   return {
     value: y,
     standardUncertainty: uc,
