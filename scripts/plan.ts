@@ -266,10 +266,11 @@ async function main(): Promise<number> {
     if (error || !site) {
       refused++;
       worstCode = Math.max(worstCode, error?.exitCode ?? 2);
+      const msg = error?.message ?? "refused";
       console.error(
-        error instanceof RowError
-          ? `error: ${error.message}`
-          : `error: ${label}: ${error?.message ?? "refused"}`,
+        error instanceof RowError || msg.startsWith(label)
+          ? `error: ${msg}`
+          : `error: ${label}: ${msg}`,
       );
       summary.push({ id: label, name: label, error: error?.message ?? "refused" });
       return;

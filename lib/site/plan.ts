@@ -631,12 +631,7 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
       extrapolate: true,
       warnings: flowWarnings,
     });
-    let f = NaN;
-    try {
-      f = frictionFactor(re, rr);
-    } catch {
-      f = 64 / re;
-    }
+    const f = frictionFactor(re, rr, "colebrook", { extrapolate: true, warnings: flowWarnings });
     return {
       label,
       flowRate: q,

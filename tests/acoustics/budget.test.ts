@@ -4,6 +4,7 @@
 import { assert, closeAbs, closeRel } from "../_assert.ts";
 import { InputError, OutOfRangeError, type Warning } from "../../lib/errors.ts";
 import { type ClampOnInputs, clampOnPath } from "../../lib/acoustics/path.ts";
+import { DEG, STEEL_V } from "./_fixture.ts";
 import {
   intensityTransmission,
   signalBudget,
@@ -11,17 +12,7 @@ import {
 } from "../../lib/acoustics/budget.ts";
 import { dopplerShift, techniqueScreening } from "../../lib/acoustics/doppler.ts";
 
-const DEG = Math.PI / 180;
-const BASE: ClampOnInputs = {
-  outsideDiameter: 0.1143,
-  wallThickness: 0.00602,
-  wallSoundSpeed: 5920,
-  wallShearSpeed: 3230,
-  fluidSoundSpeed: 1482,
-  wedgeSoundSpeed: 2720,
-  wedgeAngle: 38 * DEG,
-  traverses: 2,
-};
+const BASE = STEEL_V;
 
 Deno.test("Doppler shift via the wedge equals the shift via the liquid angle (Snell invariant)", () => {
   const p = clampOnPath(BASE);

@@ -10,18 +10,8 @@ import {
   criticalAngle,
   criticalAngles,
 } from "../../lib/acoustics/path.ts";
+import { DEG, STEEL_V } from "./_fixture.ts";
 
-const DEG = Math.PI / 180;
-const STEEL_V: ClampOnInputs = {
-  outsideDiameter: 0.1143,
-  wallThickness: 0.00602,
-  wallSoundSpeed: 5920,
-  wallShearSpeed: 3230,
-  fluidSoundSpeed: 1482,
-  wedgeSoundSpeed: 2720,
-  wedgeAngle: 38 * DEG,
-  traverses: 2,
-};
 
 Deno.test("liquid angle does not depend on the wall (speed, thickness, mode) or the lining", () => {
   const base = clampOnPath(STEEL_V);

@@ -5,19 +5,10 @@
 import { assert, closeAbs, closeRel } from "../_assert.ts";
 import { InputError } from "../../lib/errors.ts";
 import { type ClampOnInputs, clampOnPath } from "../../lib/acoustics/path.ts";
+import { DEG, STEEL_V } from "./_fixture.ts";
 import { searchWindow, spacingOverTemperature } from "../../lib/acoustics/window.ts";
 
-const DEG = Math.PI / 180;
-const BASE: ClampOnInputs = {
-  outsideDiameter: 0.1143,
-  wallThickness: 0.00602,
-  wallSoundSpeed: 5920,
-  wallShearSpeed: 3230,
-  fluidSoundSpeed: 1482,
-  wedgeSoundSpeed: 2720,
-  wedgeAngle: 38 * DEG,
-  traverses: 2,
-};
+const BASE = STEEL_V;
 
 Deno.test("wall-thickness contribution equals the analytic 2·tanθ_w − 2·N·tanθ_f (linear in t)", () => {
   for (const n of [1, 2, 4]) {
