@@ -3,17 +3,8 @@
  */
 import { type ClampOnInputs, clampOnPath } from "../lib/acoustics/path.ts";
 import { pathVelocity, transitTimes } from "../lib/acoustics/transit.ts";
+import { STEEL_V as BASE } from "../tests/acoustics/_fixture.ts";
 
-const BASE: ClampOnInputs = {
-  outsideDiameter: 0.1143,
-  wallThickness: 0.00602,
-  wallSoundSpeed: 5920,
-  wallShearSpeed: 3230,
-  fluidSoundSpeed: 1482,
-  wedgeSoundSpeed: 2720,
-  wedgeAngle: 38 * Math.PI / 180,
-  traverses: 2,
-};
 const LINED: ClampOnInputs = { ...BASE, lining: { thickness: 0.006, soundSpeed: 4000 } };
 let sink = 0;
 

@@ -6,6 +6,7 @@
  */
 import { parseArgs, type ParseArgsConfig } from "node:util";
 import { InputError, SnellpathError } from "../lib/errors.ts";
+import { type Dimension, parseQuantity } from "../lib/units.ts";
 
 /** Option spec as `node:util` `parseArgs` takes it. */
 export type OptionSpec = NonNullable<ParseArgsConfig["options"]>;
@@ -106,4 +107,56 @@ export function requireOption(
     throw new InputError(`--${name}`, v === undefined ? "nothing" : JSON.stringify(v), accepted);
   }
   return v;
+}
+
+/**
+ * Options that each take one string value (unit strings, ids, lists).
+ *
+ * @param names option names without dashes
+ * @returns the option spec for {@link parseCli}
+ */
+export function stringOptions(...names: string[]): OptionSpec {
+  return Object.fromEntries(names.map((n) => [n, { type: "string" as const }]));
+}
+
+/**
+ * Read a required quantity option that must be > 0, in SI, or throw an {@link InputError}
+ * naming it.
+ *
+ * @param values parsed values
+ * @param name option name without dashes
+ * @param dimension the dimension the option expects
+ * @param example a value to show in the message, for example "200 mm"
+ * @returns the value in SI units
+ */
+export function requirePositiveQuantity(
+  values: Record<string, unknown>,
+  name: string,
+  dimension: Dimension,
+  example: string,
+): number {
+  const what = dimension.replace(/[A-Z]/g, (c) => " " + c.toLowerCase());
+  const text = requireOption(values, name, `a ${what} such as "${example}"`);
+  const x = parseQuantity(text, dimension, `--${name}`);
+  if (!(x > 0)) throw new InputError(`--${name}`, String(values[name]), `a ${what} > 0`);
+  return x;
+}
+
+/**
+ * Read an optional quantity option in SI, or give the fallback when it is absent.
+ *
+ * @param values parsed values
+ * @param name option name without dashes
+ * @param dimension the dimension the option expects
+ * @param fallback the value (SI) when the option is not given
+ * @returns the value in SI units
+ */
+export function optionalQuantity(
+  values: Record<string, unknown>,
+  name: string,
+  dimension: Dimension,
+  fallback: number,
+): number {
+  const v = values[name];
+  return typeof v === "string" ? parseQuantity(v, dimension, `--${name}`) : fallback;
 }

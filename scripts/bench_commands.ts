@@ -6,6 +6,7 @@
  */
 import { InputError } from "../lib/errors.ts";
 import { parseCli, runMain } from "./_cli.ts";
+import { STEEL_V_OPTIONS } from "../tests/acoustics/_fixture.ts";
 
 const HELP = `
 bench_commands — wall time of whole commands as a ratio to bare Deno start-up
@@ -43,20 +44,7 @@ const CASES: Case[] = [
       "run",
       ...FLAGS,
       "scripts/spacing.ts",
-      "--od",
-      "114.3 mm",
-      "--wall",
-      "6.02 mm",
-      "--wall-speed",
-      "5920 m/s",
-      "--wall-shear-speed",
-      "3230 m/s",
-      "--fluid-speed",
-      "1482 m/s",
-      "--wedge-speed",
-      "2720 m/s",
-      "--wedge-angle",
-      "38 deg",
+      ...STEEL_V_OPTIONS,
       "--json",
     ],
   },

@@ -4,7 +4,13 @@
  *
  * @module
  */
-import { parseCli, requireOption, runMain } from "./_cli.ts";
+import {
+  optionalQuantity,
+  parseCli,
+  requirePositiveQuantity,
+  runMain,
+  stringOptions,
+} from "./_cli.ts";
 import { parseQuantity } from "../lib/units.ts";
 import { InputError } from "../lib/errors.ts";
 import { frictionFactor, type ProfileModel, reynoldsNumber } from "../lib/flow/mod.ts";
@@ -35,25 +41,24 @@ Options:
 `;
 
 runMain(async () => {
-  const { values: v } = parseCli(Deno.args, {
-    diameter: { type: "string" },
-    velocity: { type: "string" },
-    flow: { type: "string" },
-    viscosity: { type: "string" },
-    liquid: { type: "string" },
-    temperature: { type: "string" },
-    pressure: { type: "string" },
-    roughness: { type: "string" },
-    material: { type: "string" },
-    chord: { type: "string" },
-    model: { type: "string" },
-  }, HELP);
-  const D = parseQuantity(
-    requireOption(v, "diameter", 'a length such as "200 mm"'),
-    "length",
-    "--diameter",
+  const { values: v } = parseCli(
+    Deno.args,
+    stringOptions(
+      "diameter",
+      "velocity",
+      "flow",
+      "viscosity",
+      "liquid",
+      "temperature",
+      "pressure",
+      "roughness",
+      "material",
+      "chord",
+      "model",
+    ),
+    HELP,
   );
-  if (!(D > 0)) throw new InputError("--diameter", String(v.diameter), "a length > 0");
+  const D = requirePositiveQuantity(v, "diameter", "length", "200 mm");
   let V: number;
   if (typeof v.velocity === "string" && typeof v.flow === "string") {
     throw new InputError("--velocity/--flow", "both", "one of --velocity or --flow");
@@ -74,9 +79,7 @@ runMain(async () => {
       throw new InputError("--liquid", liquid, "water (for other liquids give --viscosity)");
     }
     const T = parseQuantity(v.temperature, "temperature", "--temperature");
-    const p = typeof v.pressure === "string"
-      ? parseQuantity(v.pressure, "pressure", "--pressure")
-      : 101325;
+    const p = optionalQuantity(v, "pressure", "pressure", 101325);
     const { water } = await import("../lib/water/mod.ts");
     nu = water.kinematicViscosity(T, p);
     nuSource = "iapws-r12-08";
@@ -106,7 +109,7 @@ runMain(async () => {
     eps = m.roughness;
     epsSource = `material ${v.material}`;
   }
-  const chord = typeof v.chord === "string" ? parseQuantity(v.chord, "ratio", "--chord") : 0;
+  const chord = optionalQuantity(v, "chord", "ratio", 0);
   const model = (typeof v.model === "string" ? v.model : "power-law-nikuradse") as ProfileModel;
   const re = reynoldsNumber(V, D, nu);
   const rr = eps / D;

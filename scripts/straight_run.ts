@@ -4,7 +4,14 @@
  *
  * @module
  */
-import { parseCli, requireOption, runMain } from "./_cli.ts";
+import {
+  optionalQuantity,
+  parseCli,
+  requireOption,
+  requirePositiveQuantity,
+  runMain,
+  stringOptions,
+} from "./_cli.ts";
 import { parseQuantity } from "../lib/units.ts";
 import { InputError } from "../lib/errors.ts";
 import { checkStraightRun, rankPositions, resolveFitting } from "../lib/installation/mod.ts";
@@ -49,27 +56,24 @@ function parseLength(text: string, field: string, D: number): number {
 }
 
 runMain(() => {
-  const { values: v } = parseCli(Deno.args, {
-    diameter: { type: "string" },
-    upstream: { type: "string" },
-    orientation: { type: "string" },
-    downstream: { type: "string" },
-    run: { type: "string" },
-    position: { type: "string" },
-    traverses: { type: "string" },
-    reynolds: { type: "string" },
-  }, HELP);
-  const D = parseQuantity(
-    requireOption(v, "diameter", 'a length such as "200 mm"'),
-    "length",
-    "--diameter",
+  const { values: v } = parseCli(
+    Deno.args,
+    stringOptions(
+      "diameter",
+      "upstream",
+      "orientation",
+      "downstream",
+      "run",
+      "position",
+      "traverses",
+      "reynolds",
+    ),
+    HELP,
   );
-  if (!(D > 0)) throw new InputError("--diameter", String(v.diameter), "a length > 0");
+  const D = requirePositiveQuantity(v, "diameter", "length", "200 mm");
   const up = resolveFitting(requireOption(v, "upstream", "a fitting id such as elbow-90"));
   const down = resolveFitting(typeof v.downstream === "string" ? v.downstream : "none");
-  const orientation = typeof v.orientation === "string"
-    ? parseQuantity(v.orientation, "angle", "--orientation")
-    : 0;
+  const orientation = optionalQuantity(v, "orientation", "angle", 0);
   const traverses = typeof v.traverses === "string" ? Number(v.traverses) : 2;
   if (![1, 2, 3, 4, 5, 6, 7, 8].includes(traverses)) {
     throw new InputError("--traverses", String(v.traverses), "1 (Z), 2 (V), 4 (W) or up to 8");

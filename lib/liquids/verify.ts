@@ -7,36 +7,20 @@
  */
 import { InputError } from "../errors.ts";
 import { defaultRegistry } from "../registry/mod.ts";
+import {
+  checkVerificationTable,
+  type RowEvaluator,
+  type VerificationCheck,
+} from "../registry/verify.ts";
 import { conservativeTemperature, P0, soundSpeedGibbs, T0 } from "./gibbs.ts";
 import { soundSpeed75 } from "./seawater.ts";
 import { soundSpeedUnesco1983 } from "./unesco.ts";
 
-/** One checked cell of a verification table. */
-export interface SeawaterCheck {
-  /** Table id. */
-  readonly table: string;
-  /** Row index (0-based). */
-  readonly row: number;
-  /** The row's inputs, as published. */
-  readonly inputs: Readonly<Record<string, number>>;
-  /** Output column. */
-  readonly column: string;
-  /** Published value, in the table's unit. */
-  readonly expected: number;
-  /** Computed value, in the table's unit. */
-  readonly computed: number;
-  /** |computed − expected| / |expected|. */
-  readonly relDiff: number;
-  /** Tolerance of the table for this column. */
-  readonly tolerance: number;
-  /** relDiff ≤ tolerance. */
-  readonly ok: boolean;
-}
-
-type Row = Record<string, number>;
+/** One checked cell of a seawater verification table. */
+export type SeawaterCheck = VerificationCheck;
 
 /** Evaluators by the table's `formulation` field; inputs in the tables' units (g/kg, °C, dbar). */
-const EVALUATORS: Readonly<Record<string, (r: Row) => Record<string, number>>> = {
+const EVALUATORS: Readonly<Record<string, RowEvaluator>> = {
   "TEOS-10 75-term sound speed": (r) => ({ c: soundSpeed75(r.SA / 1000, r.CT, r.p * 1e4) }),
   "TEOS-10 Gibbs function sound speed": (r) => ({
     c: soundSpeedGibbs(r.SA / 1000, r.t + T0, r.p * 1e4 + P0),
@@ -81,29 +65,5 @@ export function verifySeawaterTable(id: string): SeawaterCheck[] {
       `a table whose formulation is one of: ${SEAWATER_VERIFICATION_FORMULATIONS.join(", ")}`,
     );
   }
-  const outputs = Object.keys(t.columns).filter((c) => !t.inputs.includes(c));
-  const checks: SeawaterCheck[] = [];
-  (t.rows as Row[]).forEach((row, i) => {
-    const got = evaluate(row);
-    const inputs: Record<string, number> = {};
-    for (const k of t.inputs as string[]) inputs[k] = row[k];
-    for (const col of outputs) {
-      const expected = row[col];
-      const computed = got[col];
-      const relDiff = Math.abs(computed - expected) / Math.abs(expected);
-      const tolerance = typeof t.tolerance === "number" ? t.tolerance : t.tolerance[col];
-      checks.push({
-        table: id,
-        row: i,
-        inputs,
-        column: col,
-        expected,
-        computed,
-        relDiff,
-        tolerance,
-        ok: Number.isFinite(relDiff) && relDiff <= tolerance,
-      });
-    }
-  });
-  return checks;
+  return checkVerificationTable(t, evaluate);
 }

@@ -26,6 +26,13 @@ export {
 } from "./load.ts";
 export type { DataDoc, LoadedRegistry, LoadOptions } from "./load.ts";
 export { nearest } from "./nearest.ts";
+export { checkVerificationTable } from "./verify.ts";
+export type {
+  RowEvaluator,
+  ToTableUnit,
+  VerificationCheck,
+  VerificationTableData,
+} from "./verify.ts";
 export type { SourceEntry } from "./schemas/sources.ts";
 export type { CoreQueries } from "./core.ts";
 export type { PipeQueries } from "./q_pipes.ts";

@@ -7,31 +7,17 @@
  */
 import { InputError } from "../errors.ts";
 import { defaultRegistry } from "../registry/mod.ts";
+import {
+  checkVerificationTable,
+  type RowEvaluator,
+  type VerificationCheck,
+} from "../registry/verify.ts";
 import { iapws95Helmholtz, iapws95State } from "./iapws95.ts";
 import { if97Region1 } from "./if97.ts";
 import { iapws2008Viscosity } from "./viscosity.ts";
 
-/** One checked cell of a verification table. */
-export interface WaterCheck {
-  /** Table id. */
-  readonly table: string;
-  /** Row index (0-based). */
-  readonly row: number;
-  /** The row's inputs, as published. */
-  readonly inputs: Readonly<Record<string, number>>;
-  /** Output column. */
-  readonly column: string;
-  /** Published value, in the table's unit. */
-  readonly expected: number;
-  /** Computed value, in the table's unit. */
-  readonly computed: number;
-  /** |computed − expected| / |expected| (absolute difference when expected is 0). */
-  readonly relDiff: number;
-  /** Tolerance of the table for this column. */
-  readonly tolerance: number;
-  /** relDiff ≤ tolerance. */
-  readonly ok: boolean;
-}
+/** One checked cell of a water verification table. */
+export type WaterCheck = VerificationCheck;
 
 /** Ids of the water verification tables this module can run. */
 export const WATER_VERIFICATION_TABLES = [
@@ -54,10 +40,7 @@ const TO_SI: Readonly<Record<string, number>> = {
   "uPa s": 1e-6,
 };
 
-type Row = Record<string, number>;
-type Evaluator = (r: Row) => Record<string, number>;
-
-const EVALUATORS: Readonly<Record<string, Evaluator>> = {
+const EVALUATORS: Readonly<Record<string, RowEvaluator>> = {
   "water-iapws95-table6": (r) => {
     const h = iapws95Helmholtz(r.T, r.rho);
     const names = ["", "_d", "_dd", "_t", "_tt", "_dt"];
@@ -104,38 +87,11 @@ export function verifyWaterTable(id: string): WaterCheck[] {
       `one of ${WATER_VERIFICATION_TABLES.join(", ")}`,
     );
   }
-  const t = defaultRegistry().verification(id);
-  const outputs = Object.keys(t.columns).filter((c) => !t.inputs.includes(c));
-  const checks: WaterCheck[] = [];
-  (t.rows as Row[]).forEach((row, i) => {
-    const got = evaluate(row);
-    const inputs: Record<string, number> = {};
-    for (const k of t.inputs as string[]) inputs[k] = row[k];
-    for (const col of outputs) {
-      if (row[col] === undefined) continue;
-      const unit = t.columns[col];
-      const f = TO_SI[unit];
-      if (f === undefined) {
-        throw new InputError(`${id} column ${col}`, unit, Object.keys(TO_SI).join(", "));
-      }
-      const computed = got[col] / f;
-      const expected = row[col];
-      const tol = typeof t.tolerance === "number" ? t.tolerance : t.tolerance[col];
-      const relDiff = expected === 0
-        ? Math.abs(computed)
-        : Math.abs(computed - expected) / Math.abs(expected);
-      checks.push({
-        table: id,
-        row: i,
-        inputs,
-        column: col,
-        expected,
-        computed,
-        relDiff,
-        tolerance: tol,
-        ok: Number.isFinite(computed) && relDiff <= tol,
-      });
+  return checkVerificationTable(defaultRegistry().verification(id), evaluate, (x, col, unit) => {
+    const f = TO_SI[unit];
+    if (f === undefined) {
+      throw new InputError(`${id} column ${col}`, unit, Object.keys(TO_SI).join(", "));
     }
+    return x / f;
   });
-  return checks;
 }

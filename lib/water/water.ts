@@ -135,6 +135,12 @@ function checkTp(
   assertLiquid(T, p);
 }
 
+/** IAPWS-95 density at (T, p) after the IAPWS-95 range and liquid-phase checks. */
+function checkedLiquidDensity(T: number, p: number, options?: ValidityOptions): number {
+  checkTp(formulationInfo("iapws95"), T, p, options);
+  return iapws95DensityUnchecked(T, p);
+}
+
 /**
  * Speed of sound in liquid water at (T, p) by a named formulation: IAPWS-95 (default; density
  * by a Newton solve, then w from the Helmholtz derivatives), IAPWS-IF97 region 1, or the 1-atm
@@ -254,9 +260,7 @@ export function waterViscosity(
   p: number = STANDARD_ATMOSPHERE,
   options?: ValidityOptions,
 ): number {
-  const f = formulationInfo("iapws95");
-  checkTp(f, T, p, options);
-  const rho = iapws95DensityUnchecked(T, p);
+  const rho = checkedLiquidDensity(T, p, options);
   return checked(iapws2008ViscosityUnchecked(T, rho), "viscosity", T, p, VISCOSITY_NAME);
 }
 
@@ -283,9 +287,7 @@ export function waterKinematicViscosity(
   p: number = STANDARD_ATMOSPHERE,
   options?: ValidityOptions,
 ): number {
-  const f = formulationInfo("iapws95");
-  checkTp(f, T, p, options);
-  const rho = iapws95DensityUnchecked(T, p);
+  const rho = checkedLiquidDensity(T, p, options);
   return checked(
     iapws2008ViscosityUnchecked(T, rho) / rho,
     "kinematic viscosity",

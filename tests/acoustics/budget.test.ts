@@ -3,7 +3,7 @@
  */
 import { assert, closeAbs, closeRel } from "../_assert.ts";
 import { InputError, OutOfRangeError, type Warning } from "../../lib/errors.ts";
-import { type ClampOnInputs, clampOnPath } from "../../lib/acoustics/path.ts";
+import { clampOnPath } from "../../lib/acoustics/path.ts";
 import { DEG, STEEL_V } from "./_fixture.ts";
 import {
   intensityTransmission,
@@ -12,10 +12,8 @@ import {
 } from "../../lib/acoustics/budget.ts";
 import { dopplerShift, techniqueScreening } from "../../lib/acoustics/doppler.ts";
 
-const BASE = STEEL_V;
-
 Deno.test("Doppler shift via the wedge equals the shift via the liquid angle (Snell invariant)", () => {
-  const p = clampOnPath(BASE);
+  const p = clampOnPath(STEEL_V);
   const f = 1e6;
   const v = 1.7;
   const viaLiquid = 2 * f * v * Math.sin(p.fluidAngle) / 1482;
@@ -51,7 +49,7 @@ Deno.test("interface transmission: symmetric, 1 when matched, energy conserved w
 });
 
 Deno.test("budget: total is the sum; lining and attenuation add loss; thresholds rate it", () => {
-  const p = clampOnPath(BASE);
+  const p = clampOnPath(STEEL_V);
   const media = {
     frequency: 1e6,
     temperature: 293.15,
@@ -73,7 +71,7 @@ Deno.test("budget: total is the sum; lining and attenuation add loss; thresholds
     "interfaces",
   );
   // Cement-mortar-like lining with strong attenuation pushes it over the weak threshold.
-  const pl = clampOnPath({ ...BASE, lining: { thickness: 0.008, soundSpeed: 4000 } });
+  const pl = clampOnPath({ ...STEEL_V, lining: { thickness: 0.008, soundSpeed: 4000 } });
   const bl = signalBudget(pl, {
     ...media,
     wall: { density: 7850 },

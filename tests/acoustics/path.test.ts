@@ -12,7 +12,6 @@ import {
 } from "../../lib/acoustics/path.ts";
 import { DEG, STEEL_V } from "./_fixture.ts";
 
-
 Deno.test("liquid angle does not depend on the wall (speed, thickness, mode) or the lining", () => {
   const base = clampOnPath(STEEL_V);
   const variants: ClampOnInputs[] = [

@@ -6,7 +6,7 @@ import fc from "fast-check";
 import { assert, closeAbs, closeRel } from "../_assert.ts";
 import { InputError, NoPhysicalAnswerError } from "../../lib/errors.ts";
 import { type ClampOnInputs, clampOnPath } from "../../lib/acoustics/path.ts";
-import { DEG, STEEL_V as STEEL_V_BARE } from "./_fixture.ts";
+import { STEEL_V as STEEL_V_BARE } from "./_fixture.ts";
 import {
   flowRangeTimes,
   minimumResolvableVelocity,

@@ -32,17 +32,4 @@ export function tempPipeData(edits: Record<string, (s: string) => string> = {}):
   return dir;
 }
 
-/**
- * An edit replacing the first occurrence of `from`, which must occur.
- *
- * @param from text to find
- * @param to replacement
- * @returns the edit
- */
-export function replaceOnce(from: string, to: string): (s: string) => string {
-  return (s) => {
-    const i = s.indexOf(from);
-    if (i < 0) throw new Error(`test setup: '${from}' not found`);
-    return s.slice(0, i) + to + s.slice(i + from.length);
-  };
-}
+export { replaceOnce } from "../registry/_tempdata.ts";

@@ -6,6 +6,7 @@
  */
 import { assert, closeRel } from "../_assert.ts";
 import { debianVersion, hasPython, runPython } from "../_python.ts";
+import { liquidWaterGrid } from "./_water_states.ts";
 import {
   iapws95Density,
   iapws95Helmholtz,
@@ -48,14 +49,7 @@ Deno.test({
   name: "IAPWS-95 against Debian python3-iapws (IAPWS95) on 525 liquid states",
   ignore: !hasPython("iapws"),
   fn: async () => {
-    const states: [number, number][] = [];
-    for (let i = 0; i <= 20; i++) {
-      for (let j = 0; j < 25; j++) {
-        const T = 273.16 + i * (372.15 - 273.16) / 20;
-        const p = 0.1e6 * Math.pow(100, j / 24); // 0.1–10 MPa, log-spaced
-        states.push([T, p]);
-      }
-    }
+    const states = liquidWaterGrid();
     const ref = await runPython<number[][]>(
       `import json, sys
 from iapws import IAPWS95

@@ -6,6 +6,7 @@
  */
 import { assert, closeRel } from "../_assert.ts";
 import { debianVersion, hasPython, runPython } from "../_python.ts";
+import { liquidWaterGrid } from "./_water_states.ts";
 import { if97Region1, verifyWaterTable, water } from "../../lib/water/mod.ts";
 
 Deno.test("IAPWS R7-97 Table 5: region 1, all properties at all three points to 1e-8", () => {
@@ -22,12 +23,7 @@ Deno.test({
   name: "IF97 region 1 against Debian python3-iapws (IAPWS97) on 525 liquid states",
   ignore: !hasPython("iapws"),
   fn: async () => {
-    const states: [number, number][] = [];
-    for (let i = 0; i <= 20; i++) {
-      for (let j = 0; j < 25; j++) {
-        states.push([273.16 + i * (372.15 - 273.16) / 20, 0.1e6 * Math.pow(100, j / 24)]);
-      }
-    }
+    const states = liquidWaterGrid();
     const ref = await runPython<number[][]>(
       `import json, sys
 from iapws import IAPWS97

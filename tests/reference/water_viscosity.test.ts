@@ -5,6 +5,7 @@
  */
 import { assert, closeRel } from "../_assert.ts";
 import { debianVersion, hasPython, runPython } from "../_python.ts";
+import { liquidWaterGrid } from "./_water_states.ts";
 import { iapws2008Viscosity, verifyWaterTable, water } from "../../lib/water/mod.ts";
 
 Deno.test("IAPWS R12-08 Table 4: eleven viscosity values to half a unit of the last digit", () => {
@@ -21,12 +22,7 @@ Deno.test({
   name: "water viscosity against Debian python3-iapws (_Viscosity, IAPWS95 density), 525 states",
   ignore: !hasPython("iapws"),
   fn: async () => {
-    const states: [number, number][] = [];
-    for (let i = 0; i <= 20; i++) {
-      for (let j = 0; j < 25; j++) {
-        states.push([273.16 + i * (372.15 - 273.16) / 20, 0.1e6 * Math.pow(100, j / 24)]);
-      }
-    }
+    const states = liquidWaterGrid();
     const ref = await runPython<number[][]>(
       `import json, sys
 from iapws import IAPWS95

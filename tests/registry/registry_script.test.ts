@@ -3,26 +3,12 @@
  * project's exit codes (0 ok, 2 bad input or invalid data) and one-line errors.
  */
 import { assert } from "../_assert.ts";
+import { runScript } from "../_run.ts";
 import { SCHEMAS } from "../../lib/registry/schemas/mod.ts";
 import { removeTemp, replaceOnce, tempData } from "./_tempdata.ts";
 
-const SCRIPT = new URL("../../scripts/registry.ts", import.meta.url).pathname;
-
-async function run(...args: string[]): Promise<{ code: number; out: string; err: string }> {
-  const r = await new Deno.Command(Deno.execPath(), {
-    args: [
-      "run",
-      "--ignore-env=LOG_TOKENS,LOG_STREAM",
-      "--allow-read",
-      "--allow-write",
-      SCRIPT,
-      ...args,
-    ],
-    stdout: "piped",
-    stderr: "piped",
-  }).output();
-  const dec = new TextDecoder();
-  return { code: r.code, out: dec.decode(r.stdout), err: dec.decode(r.stderr) };
+function run(...args: string[]) {
+  return runScript("registry.ts", args, { permissions: ["--allow-read", "--allow-write"] });
 }
 
 Deno.test("validate: OK with the hash, or the loader's one-line error and exit 2", async () => {
@@ -30,15 +16,15 @@ Deno.test("validate: OK with the hash, or the loader's one-line error and exit 2
   const bad = tempData({ "materials.yaml": replaceOnce("id: stainless-steel-316", "id: copper") });
   try {
     const ok = await run("validate", good, "--json");
-    assert.equal(ok.code, 0, ok.err);
-    const res = JSON.parse(ok.out);
+    assert.equal(ok.code, 0, ok.stderr);
+    const res = JSON.parse(ok.stdout);
     assert.equal(res.ok, true);
     assert.match(res.hash, /^[0-9a-f]{64}$/);
     const human = await run("validate", good);
-    assert.ok(human.out.startsWith(`OK ${res.hash}`), human.out);
+    assert.ok(human.stdout.startsWith(`OK ${res.hash}`), human.stdout);
     const ko = await run("validate", bad);
     assert.equal(ko.code, 2);
-    const lines = ko.err.trim().split("\n");
+    const lines = ko.stderr.trim().split("\n");
     assert.equal(lines.length, 1, "one line, no stack");
     assert.match(lines[0], /^error: materials\.yaml: entry copper, field .*duplicate id 'copper'/);
   } finally {
@@ -49,22 +35,22 @@ Deno.test("validate: OK with the hash, or the loader's one-line error and exit 2
 
 Deno.test("show and list a material, a source; a miss suggests ids", async () => {
   const show = await run("show", "acrylic", "--json");
-  assert.equal(show.code, 0, show.err);
-  const m = JSON.parse(show.out);
+  assert.equal(show.code, 0, show.stderr);
+  const m = JSON.parse(show.stdout);
   assert.equal(m.id, "acrylic");
   assert.ok(m.longitudinal > 2000 && m.trace.length > 0);
   const src = await run("show", "idelchik-2007");
   assert.equal(src.code, 0);
-  assert.match(src.out, /Handbook of Hydraulic Resistance/);
+  assert.match(src.stdout, /Handbook of Hydraulic Resistance/);
   const list = await run("list", "materials", "--json");
   assert.equal(list.code, 0);
-  assert.ok(JSON.parse(list.out).entries.some((e: { id: string }) => e.id === "peek"));
+  assert.ok(JSON.parse(list.stdout).entries.some((e: { id: string }) => e.id === "peek"));
   const miss = await run("show", "acrylik");
   assert.equal(miss.code, 2);
-  assert.match(miss.err, /acrylic/);
+  assert.match(miss.stderr, /acrylic/);
   const bad = await run("frobnicate");
   assert.equal(bad.code, 2);
-  assert.match(bad.err, /^error: command: got "frobnicate"/);
+  assert.match(bad.stderr, /^error: command: got "frobnicate"/);
 });
 
 Deno.test("export: the whole registry, and a JSON Schema with one definition per kind", async () => {
@@ -72,14 +58,14 @@ Deno.test("export: the whole registry, and a JSON Schema with one definition per
   try {
     const out = `${dir}/registry.json`;
     const r = await run("export", "--out", out);
-    assert.equal(r.code, 0, r.err);
+    assert.equal(r.code, 0, r.stderr);
     const data = JSON.parse(await Deno.readTextFile(out));
     assert.match(data.hash, /^[0-9a-f]{64}$/);
     assert.ok(data.sources.length > 5);
     assert.ok(data.documents.some((d: { kind: string }) => d.kind === "materials"));
     const s = await run("export", "--schema");
-    assert.equal(s.code, 0, s.err);
-    const schema = JSON.parse(s.out);
+    assert.equal(s.code, 0, s.stderr);
+    const schema = JSON.parse(s.stdout);
     assert.deepEqual(Object.keys(schema.$defs).sort(), Object.keys(SCHEMAS).sort());
     const mat = schema.$defs.materials;
     assert.equal(mat.properties.kind.const, "materials");

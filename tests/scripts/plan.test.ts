@@ -3,30 +3,13 @@
  * the HTML report in a real headless browser (Debian's chromium).
  */
 import { assert } from "../_assert.ts";
+import { runScript } from "../_run.ts";
 import { hasChromium, renderHtml } from "../_browser.ts";
 import { defaultRegistry } from "../../lib/registry/mod.ts";
 
-const ROOT = new URL("../../", import.meta.url).pathname;
-
-async function plan(args: string[], cwd = ROOT) {
-  const out = await new Deno.Command(Deno.execPath(), {
-    args: [
-      "run",
-      "--ignore-env=LOG_TOKENS,LOG_STREAM",
-      `--allow-read`,
-      `--allow-write`,
-      `${ROOT}scripts/plan.ts`,
-      ...args,
-    ],
-    cwd,
-    stdout: "piped",
-    stderr: "piped",
-  }).output();
-  return {
-    code: out.code,
-    stdout: new TextDecoder().decode(out.stdout),
-    stderr: new TextDecoder().decode(out.stderr),
-  };
+/** scripts/plan.ts, run from the repository root; it reads sites and writes reports anywhere. */
+function plan(args: string[]) {
+  return runScript("plan.ts", args, { permissions: ["--allow-read", "--allow-write"] });
 }
 
 const GOOD = `name: Fleet site (invented)

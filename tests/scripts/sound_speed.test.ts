@@ -1,29 +1,14 @@
 import { assert } from "../_assert.ts";
-
-const ROOT = new URL("../../", import.meta.url);
-async function run(...args: string[]) {
-  const out = await new Deno.Command(Deno.execPath(), {
-    args: ["run", "--ignore-env=LOG_TOKENS,LOG_STREAM", "--allow-read=.", ...args],
-    cwd: ROOT,
-    stdout: "piped",
-    stderr: "piped",
-  }).output();
-  return {
-    code: out.code,
-    stdout: new TextDecoder().decode(out.stdout),
-    stderr: new TextDecoder().decode(out.stderr),
-  };
-}
+import { runScript } from "../_run.ts";
 
 Deno.test("sound_speed: water at 20 °C, JSON", async () => {
-  const r = await run(
-    "scripts/sound_speed.ts",
+  const r = await runScript("sound_speed.ts", [
     "--liquid",
     "water",
     "--temperature",
     "20 degC",
     "--json",
-  );
+  ]);
   assert.equal(r.code, 0, r.stderr);
   const j = JSON.parse(r.stdout);
   // Source: IAPWS-95 gives 1482.35 m/s at 20 °C, 1 atm (value recalled, widely quoted).
@@ -31,8 +16,7 @@ Deno.test("sound_speed: water at 20 °C, JSON", async () => {
 });
 
 Deno.test("sound_speed: --compare for seawater lists three formulations and a spread", async () => {
-  const r = await run(
-    "scripts/sound_speed.ts",
+  const r = await runScript("sound_speed.ts", [
     "--liquid",
     "seawater",
     "--salinity",
@@ -43,7 +27,7 @@ Deno.test("sound_speed: --compare for seawater lists three formulations and a sp
     "100 bar",
     "--compare",
     "--json",
-  );
+  ]);
   assert.equal(r.code, 0, r.stderr);
   const j = JSON.parse(r.stdout);
   assert.equal(j.formulations.length, 3);
@@ -51,25 +35,24 @@ Deno.test("sound_speed: --compare for seawater lists three formulations and a sp
 });
 
 Deno.test("sound_speed: exit codes and one-line errors", async () => {
-  const boil = await run("scripts/sound_speed.ts", "--temperature", "120 degC");
+  const boil = await runScript("sound_speed.ts", ["--temperature", "120 degC"]);
   assert.equal(boil.code, 1);
   assert.equal(boil.stderr.trim().split("\n").length, 1);
-  const bad = await run(
-    "scripts/sound_speed.ts",
+  const bad = await runScript("sound_speed.ts", [
     "--liquid",
     "metanol",
     "--temperature",
     "20 degC",
-  );
+  ]);
   assert.equal(bad.code, 2);
   assert.match(bad.stderr, /methanol/);
-  const unit = await run("scripts/sound_speed.ts", "--temperature", "20 m");
+  const unit = await runScript("sound_speed.ts", ["--temperature", "20 m"]);
   assert.equal(unit.code, 2);
   assert.ok(!unit.stderr.includes("    at "), "no stack trace");
 });
 
 Deno.test("verify: every published table passes", async () => {
-  const r = await run("scripts/verify.ts", "--json");
+  const r = await runScript("verify.ts", ["--json"]);
   assert.equal(r.code, 0, r.stdout.slice(-2000) + r.stderr);
   const j = JSON.parse(r.stdout);
   const ids = j.tables.map((t: { id: string }) => t.id);

@@ -3,68 +3,28 @@
  */
 import { assert, closeRel } from "../_assert.ts";
 import { clampOnPath } from "../../lib/acoustics/path.ts";
-
-const ROOT = new URL("../../", import.meta.url);
-
-async function run(script: string, args: string[]) {
-  const out = await new Deno.Command(Deno.execPath(), {
-    args: [
-      "run",
-      "--ignore-env=LOG_TOKENS,LOG_STREAM",
-      "--allow-read=.",
-      `scripts/${script}`,
-      ...args,
-    ],
-    cwd: ROOT,
-    stdout: "piped",
-    stderr: "piped",
-  }).output();
-  return {
-    code: out.code,
-    stdout: new TextDecoder().decode(out.stdout),
-    stderr: new TextDecoder().decode(out.stderr),
-  };
-}
-
-const RAW = [
-  "--od",
-  "114.3 mm",
-  "--wall",
-  "6.02 mm",
-  "--wall-speed",
-  "5920 m/s",
-  "--wall-shear-speed",
-  "3230 m/s",
-  "--fluid-speed",
-  "1482 m/s",
-  "--wedge-speed",
-  "2720 m/s",
-  "--wedge-angle",
-  "38 deg",
-];
+import { STEEL_V, STEEL_V_OPTIONS } from "../acoustics/_fixture.ts";
+import { runScript } from "../_run.ts";
 
 Deno.test("spacing: raw figures, three mountings, JSON matches the library", async () => {
-  const r = await run("spacing.ts", [...RAW, "--traverses", "1,2,4", "--json"]);
+  const r = await runScript("spacing.ts", [...STEEL_V_OPTIONS, "--traverses", "1,2,4", "--json"]);
   assert.equal(r.code, 0, r.stderr);
   const j = JSON.parse(r.stdout);
   assert.equal(j.paths.length, 3);
   for (const p of j.paths) {
-    const lib = clampOnPath({
-      outsideDiameter: 0.1143,
-      wallThickness: 0.00602,
-      wallSoundSpeed: 5920,
-      wallShearSpeed: 3230,
-      fluidSoundSpeed: 1482,
-      wedgeSoundSpeed: 2720,
-      wedgeAngle: 38 * Math.PI / 180,
-      traverses: p.traverses,
-    });
+    const lib = clampOnPath({ ...STEEL_V, traverses: p.traverses });
     closeRel(p.spacing, lib.spacing, 1e-12, `N = ${p.traverses}`);
   }
 });
 
 Deno.test("spacing: human table with the search window", async () => {
-  const r = await run("spacing.ts", [...RAW, "--u-fluid-speed", "10 m/s", "--u-wall", "0.6 mm"]);
+  const r = await runScript("spacing.ts", [
+    ...STEEL_V_OPTIONS,
+    "--u-fluid-speed",
+    "10 m/s",
+    "--u-wall",
+    "0.6 mm",
+  ]);
   assert.equal(r.code, 0, r.stderr);
   assert.match(r.stdout, /V\s+2\s+85\.73/);
   assert.match(r.stdout, /search window/);
@@ -72,9 +32,9 @@ Deno.test("spacing: human table with the search window", async () => {
 });
 
 Deno.test("spacing: beyond the critical angles exits 1 naming them, one line, no stack", async () => {
-  const args = [...RAW];
+  const args = [...STEEL_V_OPTIONS];
   args[args.indexOf("38 deg")] = "62 deg";
-  const r = await run("spacing.ts", args);
+  const r = await runScript("spacing.ts", args);
   assert.equal(r.code, 1);
   assert.match(r.stderr, /critical angle 27\.35 deg/);
   assert.match(r.stderr, /critical angle 57\.36 deg/);
@@ -82,25 +42,25 @@ Deno.test("spacing: beyond the critical angles exits 1 naming them, one line, no
 });
 
 Deno.test("spacing: bad input exits 2 with a one-line message naming the option", async () => {
-  const bad = await run("spacing.ts", [...RAW, "--traverses", "2.5"]);
+  const bad = await runScript("spacing.ts", [...STEEL_V_OPTIONS, "--traverses", "2.5"]);
   assert.equal(bad.code, 2);
   assert.match(bad.stderr, /--traverses/);
-  const unit = await run("spacing.ts", ["--od", "3 kg"]);
+  const unit = await runScript("spacing.ts", ["--od", "3 kg"]);
   assert.equal(unit.code, 2);
   assert.match(unit.stderr, /--od/);
-  const missing = await run("spacing.ts", ["--od", "114.3 mm"]);
+  const missing = await runScript("spacing.ts", ["--od", "114.3 mm"]);
   assert.equal(missing.code, 2);
   assert.match(missing.stderr, /--wall/);
 });
 
 Deno.test("spacing: --help exits 0", async () => {
-  const r = await run("spacing.ts", ["--help"]);
+  const r = await runScript("spacing.ts", ["--help"]);
   assert.equal(r.code, 0);
   assert.match(r.stdout, /--traverses/);
 });
 
 Deno.test("spacing: catalogue terms (pipe, water, acrylic) resolve", async () => {
-  const r = await run("spacing.ts", [
+  const r = await runScript("spacing.ts", [
     "--standard",
     "ASME B36.10M",
     "--nps",
@@ -127,8 +87,8 @@ Deno.test("spacing: catalogue terms (pipe, water, acrylic) resolve", async () =>
 });
 
 Deno.test("transit: velocity range, resolution and wall-borne check", async () => {
-  const r = await run("transit.ts", [
-    ...RAW,
+  const r = await runScript("transit.ts", [
+    ...STEEL_V_OPTIONS,
     "--velocity",
     "0.1 m/s,1 m/s,3 m/s",
     "--timing-resolution",
@@ -143,6 +103,12 @@ Deno.test("transit: velocity range, resolution and wall-borne check", async () =
   assert.ok(j.range.maximum.deltaT > j.range.minimum.deltaT);
   assert.ok(j.minimumResolvableVelocity > 0 && j.minimumResolvableVelocity < 0.01);
   assert.equal(j.wallBorne.overlaps, false);
-  const both = await run("transit.ts", [...RAW, "--velocity", "1 m/s", "--flow", "1 L/s"]);
+  const both = await runScript("transit.ts", [
+    ...STEEL_V_OPTIONS,
+    "--velocity",
+    "1 m/s",
+    "--flow",
+    "1 L/s",
+  ]);
   assert.equal(both.code, 2);
 });

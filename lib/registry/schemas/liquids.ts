@@ -29,6 +29,23 @@ const Points = z.array(Point).min(2).refine(
   "points must be in increasing temperature",
 );
 
+/** Any property by Batzle & Wang from the entry's `api` (same shape for every property). */
+const BatzleWang = z.strictObject({
+  model: z.literal("batzle-wang"),
+  spread: z.number().nonnegative(),
+  ...Prov,
+});
+
+/** A property tabulated against temperature, in `unit`. */
+const tableModel = <U extends z.ZodType>(unit: U) =>
+  z.strictObject({
+    model: z.literal("table"),
+    unit,
+    points: Points,
+    spread: z.number().nonnegative(),
+    ...Prov,
+  });
+
 /** Sound-speed model. */
 export const SoundSpeedModel = z.discriminatedUnion("model", [
   z.strictObject({
@@ -53,11 +70,7 @@ export const SoundSpeedModel = z.discriminatedUnion("model", [
     spread: z.number().nonnegative(),
     ...Prov,
   }),
-  z.strictObject({
-    model: z.literal("batzle-wang"),
-    spread: z.number().nonnegative(),
-    ...Prov,
-  }),
+  BatzleWang,
 ]);
 
 /** Density model. */
@@ -71,29 +84,13 @@ export const DensityModel = z.discriminatedUnion("model", [
     spread: z.number().nonnegative(),
     ...Prov,
   }),
-  z.strictObject({
-    model: z.literal("table"),
-    unit: z.literal("kg/m^3"),
-    points: Points,
-    spread: z.number().nonnegative(),
-    ...Prov,
-  }),
-  z.strictObject({
-    model: z.literal("batzle-wang"),
-    spread: z.number().nonnegative(),
-    ...Prov,
-  }),
+  tableModel(z.literal("kg/m^3")),
+  BatzleWang,
 ]);
 
 /** Viscosity model. */
 export const ViscosityModel = z.discriminatedUnion("model", [
-  z.strictObject({
-    model: z.literal("table"),
-    unit: z.enum(["mPa s", "Pa s"]),
-    points: Points,
-    spread: z.number().nonnegative(),
-    ...Prov,
-  }),
+  tableModel(z.enum(["mPa s", "Pa s"])),
   z.strictObject({
     model: z.literal("walther"),
     unit: z.literal("mm^2/s"),
@@ -101,11 +98,7 @@ export const ViscosityModel = z.discriminatedUnion("model", [
     spread: z.number().nonnegative(),
     ...Prov,
   }),
-  z.strictObject({
-    model: z.literal("batzle-wang"),
-    spread: z.number().nonnegative(),
-    ...Prov,
-  }),
+  BatzleWang,
 ]);
 
 /** Provenance fields a liquid entry or one of its models may carry. */
