@@ -1166,10 +1166,11 @@ function u(
 }
 
 /**
- * The mounting the budget is for: among mountings whose signal is not weak and whose wall-borne
- * signal does not overlap, the one with the most traverses that is resolvable at minimum flow,
- * else the most traverses; if none qualifies, the first given (common practice: more traverses
- * give a longer path and a larger Δt, as long as the signal holds).
+ * The mounting the budget is for (common practice): among mountings whose signal is not weak and
+ * whose wall-borne signal does not overlap, those resolvable at minimum flow (else all usable
+ * ones) whose worst expanded uncertainty is within 5 % of the lowest; of these, an even traverse
+ * count first (both transducers on one side, and the two bore crossings cancel a transverse flow
+ * component), then the fewest traverses (the strongest signal). If none is usable, the first given.
  */
 function chooseMounting<T extends MountingPlan>(plans: readonly T[]): T {
   if (plans.length === 0) throw new InputError("mountings", "none", "at least one traverse count");
@@ -1177,13 +1178,12 @@ function chooseMounting<T extends MountingPlan>(plans: readonly T[]): T {
   if (usable.length === 0) return plans[0];
   const resolvable = usable.filter((m) => m.resolvableAtMinimum);
   const pool = resolvable.length ? resolvable : usable;
-  const lowest = Math.min(
-    ...pool.map((m) => m.expandedByPoint.length ? Math.max(...m.expandedByPoint) : 0),
-  );
-  const good = pool.filter((m) =>
-    !m.expandedByPoint.length || Math.max(...m.expandedByPoint) <= lowest * 1.05
-  );
-  return good.reduce((a, b) => (b.traverses < a.traverses ? b : a));
+  const worst = (m: T) => (m.expandedByPoint.length ? Math.max(...m.expandedByPoint) : 0);
+  const lowest = Math.min(...pool.map(worst));
+  const good = pool.filter((m) => worst(m) <= lowest * 1.05);
+  return [...good].sort((a, b) =>
+    (a.traverses % 2) - (b.traverses % 2) || a.traverses - b.traverses
+  )[0];
 }
 
 function suggestionFor(
