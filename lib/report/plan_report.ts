@@ -580,6 +580,10 @@ export function fleetHtml(
           r.row.map((c, i) =>
             i === 1
               ? `<td><a href="${escapeHtml(r.href)}">${escapeHtml(String(c))}</a></td>`
+              : i === FLEET_HEADERS.length - 1
+              ? `<td title="${escapeHtml(String(c))}"><code>${
+                escapeHtml(String(c).slice(0, 12))
+              }…</code></td>`
               : `<td>${escapeHtml(String(c))}</td>`
           ).join("")
         }</tr>`
