@@ -46,6 +46,18 @@ interface GibbsTables {
   sk: Int8Array;
   sg: Float64Array;
   Su: number;
+  /** Highest power of π with a non-zero term, per row j (the grid is zero beyond it). */
+  kmax: Int8Array;
+  /** First cell of row j in the per-cell layout below (cells (j, 0..kmax_j), row by row). */
+  rowStart: Int16Array;
+  /** Per cell: the pure-water coefficient. */
+  cellW: Float64Array;
+  /** Per cell: its saline coefficients g_ijk in cellG[cellOff[c] .. cellOff[c+1]), from the
+   * highest i down to i = 2 (zeros fill gaps), for c_jk(x) = w_jk + x² Σ g_ijk x^(i−2). */
+  cellOff: Int16Array;
+  cellG: Float64Array;
+  /** Coefficient of x² ln x per row j (the i = 1 terms, all at k = 0). */
+  lnRow: Float64Array;
 }
 
 let tables: GibbsTables | undefined;
@@ -60,6 +72,34 @@ function load(): GibbsTables {
   const K = Math.max(...w.map((r) => r[1]), ...s.map((r) => r[2]));
   const water = new Float64Array((J + 1) * (K + 1));
   for (const r of w) water[r[0] * (K + 1) + r[1]] += r[2];
+  // Per-cell layout for evaluating without collapsing (salinity changing at every point).
+  const kmax = new Int8Array(J + 1);
+  for (const r of w) kmax[r[0]] = Math.max(kmax[r[0]], r[1]);
+  for (const r of s) kmax[r[1]] = Math.max(kmax[r[1]], r[2]);
+  const rowStart = new Int16Array(J + 2);
+  for (let j = 0; j <= J; j++) rowStart[j + 1] = rowStart[j] + kmax[j] + 1;
+  const cells = rowStart[J + 1];
+  const cellW = new Float64Array(cells);
+  const lnRow = new Float64Array(J + 1);
+  const imax = new Int8Array(cells).fill(1);
+  for (const r of w) cellW[rowStart[r[0]] + r[1]] += r[2];
+  for (const r of s) {
+    if (r[0] === 1) {
+      if (r[2] !== 0) throw new Error("saline x² ln x terms are expected at k = 0 only");
+      lnRow[r[1]] += r[3];
+    } else {
+      const c = rowStart[r[1]] + r[2];
+      imax[c] = Math.max(imax[c], r[0]);
+    }
+  }
+  const cellOff = new Int16Array(cells + 1);
+  for (let c = 0; c < cells; c++) cellOff[c + 1] = cellOff[c] + imax[c] - 1;
+  const cellG = new Float64Array(cellOff[cells]);
+  for (const r of s) {
+    if (r[0] === 1) continue;
+    const c = rowStart[r[1]] + r[2];
+    cellG[cellOff[c] + imax[c] - r[0]] += r[3];
+  }
   tables = {
     J,
     K,
@@ -69,10 +109,128 @@ function load(): GibbsTables {
     sk: Int8Array.from(s.map((r) => r[2])),
     sg: Float64Array.from(s.map((r) => r[3])),
     Su: sd.constants.Su as number,
+    kmax,
+    rowStart,
+    cellW,
+    cellOff,
+    cellG,
+    lnRow,
   };
   coef = new Float64Array(water.length);
+  gridCol = new Float64Array(J + 1);
+  pointCol = new Float64Array(J + 1);
+  entropyGrid = buildEntropyPass(tables, true);
+  entropyDirect = buildEntropyPass(tables, false);
+  isobar = buildIsobar(J);
   return tables;
 }
+
+/** A number as a JavaScript literal that reads back to the same double. */
+function lit(x: number): string {
+  return x < 0 || Object.is(x, -0) ? `(${x})` : String(x);
+}
+
+/** Horner's scheme as one expression: terms from the highest power down, in the variable v. */
+function hornerExpr(terms: string[], v: string): string {
+  let e = terms[0];
+  for (let n = 1; n < terms.length; n++) e = `(${e}) * ${v} + ${terms[n]}`;
+  return e;
+}
+
+/** (c, x, x2, x2lnx, tau, pi, col, o) => void: the generated entropy pass of theta(). */
+type EntropyPass = (
+  c: Float64Array,
+  x: number,
+  x2: number,
+  x2lnx: number,
+  tau: number,
+  pi: number,
+  col: Float64Array,
+  o: Float64Array,
+) => void;
+
+/**
+ * Generate, from the coefficient layout, straight-line code for the reduced g_τ, g_ττ and g_τπ at
+ * (τ, π) (rows j ≥ 1 as Horner sums in π, then τ), into o[0..2]. With `grid` the cells are read
+ * from the collapsed grid `c`; otherwise each cell's salinity polynomial c_jk(x) is summed in
+ * place (Horner in x) and the k = 0 cells, the 101 325 Pa isobar, are stored in `col`. Generated
+ * once per process: the same sums as loops over the layout, without the loop overhead, which
+ * dominates these short sums.
+ */
+function buildEntropyPass(t: GibbsTables, grid: boolean): EntropyPass {
+  const W = t.K + 1;
+  const lines: string[] = [];
+  const cell = (j: number, k: number): string => {
+    if (grid) return `c[${j * W + k}]`;
+    const c = t.rowStart[j] + k;
+    const g: string[] = [];
+    for (let n = t.cellOff[c]; n < t.cellOff[c + 1]; n++) g.push(lit(t.cellG[n]));
+    let e = lit(t.cellW[c]);
+    if (g.length) e += ` + x2 * (${hornerExpr(g, "x")})`;
+    if (k === 0 && t.lnRow[j] !== 0) e += ` + ${lit(t.lnRow[j])} * x2lnx`;
+    return e;
+  };
+  const e0: string[] = [], e1: string[] = [], f0: string[] = [];
+  for (let j = t.J; j >= 1; j--) {
+    const cs: string[] = [], ds: string[] = [];
+    for (let k = t.kmax[j]; k >= 0; k--) {
+      lines.push(`const c${j}_${k} = ${cell(j, k)};`);
+      cs.push(`c${j}_${k}`);
+      if (k > 0) ds.push(`${k} * c${j}_${k}`);
+    }
+    if (!grid) lines.push(`col[${j}] = c${j}_0;`);
+    lines.push(`const q${j} = ${hornerExpr(cs, "pi")};`);
+    lines.push(`const d${j} = ${ds.length ? hornerExpr(ds, "pi") : "0"};`);
+    e0.push(`${j} * q${j}`);
+    if (j > 1) e1.push(`${j * (j - 1)} * q${j}`);
+    f0.push(`${j} * d${j}`);
+  }
+  if (!grid) lines.push(`col[0] = ${cell(0, 0)};`);
+  lines.push(`o[0] = ${hornerExpr(e0, "tau")};`);
+  lines.push(`o[1] = ${e1.length ? hornerExpr(e1, "tau") : "0"};`);
+  lines.push(`o[2] = ${hornerExpr(f0, "tau")};`);
+  return new Function(
+    "c",
+    "x",
+    "x2",
+    "x2lnx",
+    "tau",
+    "pi",
+    "col",
+    "o",
+    lines.join("\n"),
+  ) as EntropyPass;
+}
+
+/** (col, tau, o) => void: the generated isobar polynomial of theta() and potentialEnthalpy(). */
+type Isobar = (col: Float64Array, tau: number, o: Float64Array) => void;
+
+/**
+ * Generate straight-line code for the isobar polynomial g(τ) = Σ_j col[j] τ^j: o[0..3] = the
+ * m-th τ-derivative divided by (m−1)! for m = 1..4 (g_τ, g_ττ, ½ g_τττ, ⅙ g_ττττ; the
+ * coefficient of col[j] τ^(j−m) is m·C(j, m)), and o[4] = g; each its own Horner sum, so the
+ * five run side by side.
+ */
+function buildIsobar(J: number): Isobar {
+  const lines: string[] = [];
+  for (let d = 0; d < 5; d++) {
+    const m = d === 4 ? 0 : d + 1;
+    const terms: string[] = [];
+    for (let j = J; j >= m; j--) {
+      let binom = 1;
+      for (let n = 1; n <= m; n++) binom = binom * (j - m + n) / n;
+      const mult = m === 0 ? 1 : m * binom;
+      terms.push(mult === 1 ? `col[${j}]` : `${mult} * col[${j}]`);
+    }
+    lines.push(`o[${d}] = ${terms.length ? hornerExpr(terms, "tau") : "0"};`);
+  }
+  return new Function("col", "tau", "o", lines.join("\n")) as Isobar;
+}
+
+let isobar: Isobar | undefined;
+let entropyGrid: EntropyPass | undefined;
+let entropyDirect: EntropyPass | undefined;
+const eo = new Float64Array(5);
 
 const TU = 40;
 const PU = 1e8;
@@ -80,6 +238,40 @@ const powX = new Float64Array(9);
 /** Water plus saline coefficients at the salinity `coefSA`, on the dense (j, k) grid. */
 let coef = new Float64Array(0);
 let coefSA = Number.NaN;
+/** The salinity of the previous call: a grid is collapsed only when a salinity repeats. */
+let lastSA = Number.NaN;
+/** The k = 0 column (the 101 325 Pa isobar) of the collapsed grid, and of the current point. */
+let gridCol: Float64Array = new Float64Array(0);
+let pointCol: Float64Array = new Float64Array(0);
+/** x = sqrt(S_A/S_u), x² and x² ln x at the current point (direct evaluation). */
+let px = 0, px2 = 0, px2lnx = 0;
+
+/** Set px, px2, px2lnx for S_A. */
+function saltPowers(t: GibbsTables, SA: number): void {
+  if (SA > 0) {
+    px = Math.sqrt(SA / t.Su);
+    px2 = px * px;
+    px2lnx = px2 * Math.log(px);
+  } else {
+    px = 0;
+    px2 = 0;
+    px2lnx = 0;
+  }
+}
+
+/**
+ * True when the collapsed grid is (now) the one for S_A: the grid is kept while S_A stays the
+ * same and collapsed again when a new S_A comes twice in a row; a salinity that changes at every
+ * point is evaluated directly from the per-cell layout instead (cheaper than collapsing).
+ */
+function useGrid(t: GibbsTables, SA: number): boolean {
+  if (SA === coefSA) return true;
+  const repeat = SA === lastSA;
+  lastSA = SA;
+  if (!repeat) return false;
+  collapse(t, SA);
+  return true;
+}
 
 /**
  * Collapse the salinity sum at S_A into the dense grid: g = Σ_jk C_jk τ^j π^k with
@@ -100,20 +292,37 @@ function collapse(t: GibbsTables, SA: number): Float64Array {
     }
   }
   coefSA = SA;
+  for (let j = 0; j <= t.J; j++) gridCol[j] = coef[j * (t.K + 1)];
   return coef;
 }
 
-/** Reduced g and its derivatives by nested Horner sums over the collapsed grid, into `out`. */
-function evaluate(t: GibbsTables, c: Float64Array, tau: number, pi: number): void {
-  const W = t.K + 1;
+/**
+ * c_jk(x) of one cell of the per-cell layout at the current point: w_jk + x² Σ g_ijk x^(i−2),
+ * plus the x² ln x term on the k = 0 column.
+ */
+function cellValue(t: GibbsTables, j: number, k: number): number {
+  const c = t.rowStart[j] + k;
+  let s = 0;
+  for (let n = t.cellOff[c], e = t.cellOff[c + 1]; n < e; n++) s = s * px + t.cellG[n];
+  const v = t.cellW[c] + px2 * s;
+  return k === 0 ? v + t.lnRow[j] * px2lnx : v;
+}
+
+/**
+ * Reduced g and its derivatives by nested Horner sums, into `out`: over the collapsed grid when
+ * `grid`, else over the per-cell layout at the current point's salinity (saltPowers).
+ */
+function evaluate(t: GibbsTables, grid: boolean, tau: number, pi: number): void {
+  const W = t.K + 1, c = coef;
   // Outer Horner in τ over the rows' values q_j(π), q'_j(π), q''_j(π).
   let a0 = 0, a1 = 0, a2 = 0, b0 = 0, b1 = 0, c0 = 0;
   for (let j = t.J; j >= 0; j--) {
     let q = 0, q1 = 0, q2 = 0;
-    for (let k = j * W + t.K; k >= j * W; k--) {
+    for (let k = t.kmax[j]; k >= 0; k--) {
+      const v = grid ? c[j * W + k] : cellValue(t, j, k);
       q2 = q2 * pi + q1;
       q1 = q1 * pi + q;
-      q = q * pi + c[k];
+      q = q * pi + v;
     }
     a2 = a2 * tau + a1;
     a1 = a1 * tau + a0;
@@ -156,68 +365,83 @@ function evaluate(t: GibbsTables, c: Float64Array, tau: number, pi: number): voi
  */
 export function gibbsSeawater(SA: number, T: number, p: number): GibbsDerivatives {
   const t = load();
-  evaluate(t, collapse(t, SA), (T - T0) / TU, (p - P0) / PU);
+  const grid = useGrid(t, SA);
+  if (!grid) saltPowers(t, SA);
+  evaluate(t, grid, (T - T0) / TU, (p - P0) / PU);
   return out;
 }
 
 const out: GibbsDerivatives = { g: 0, gT: 0, gP: 0, gTT: 0, gTP: 0, gPP: 0 };
 
+/** τ of theta()'s last isobar evaluation (its results stay in `eo`). */
+let isobarTau = 0;
+
 /**
  * θ for potentialTemperature and conservativeTemperature, checks done. Newton's method on
- * g_T(S_A, θ, p0) = g_T(S_A, T, p) over the 101 325 Pa isobar of the collapsed polynomial (its
- * k = 0 column), started from the linear lapse-rate estimate θ₀ = T + (g_Tp/g_TT)(p − p0) at
- * (T, p). Works in the reduced τ = (θ − T0)/40 K.
+ * g_T(S_A, θ, p0) = g_T(S_A, T, p) over the 101 325 Pa isobar of the polynomial (its k = 0
+ * column), started from the linear lapse-rate estimate
+ * θ₀ = T + (g_Tp/g_TT)(p − p0) at (T, p); the first step is a Halley step (the third derivative
+ * is at hand), the later ones Newton steps. Works in the reduced τ = (θ − T0)/40 K.
  */
 function theta(SA: number, T: number, p: number): number {
   const t = load();
-  const c = collapse(t, SA);
-  const W = t.K + 1, J = t.J, K = t.K;
-  // Reduced g_τ, g_ττ, g_τπ at (T, p): rows j ≥ 1 summed in π (value, derivative), then τ.
+  // Reduced g_τ, g_ττ, g_τπ at (T, p).
   const tau0 = (T - T0) / TU, pi = (p - P0) / PU;
-  let e0 = 0, e1 = 0, f0 = 0;
-  for (let j = J; j > 0; j--) {
-    let q = 0, q1 = 0;
-    for (let k = j * W + K; k >= j * W; k--) {
-      q1 = q1 * pi + q;
-      q = q * pi + c[k];
-    }
-    e1 = e1 * tau0 + e0;
-    e0 = e0 * tau0 + j * q;
-    f0 = f0 * tau0 + j * q1;
+  let col: Float64Array;
+  if (useGrid(t, SA)) {
+    col = gridCol;
+    entropyGrid!(coef, 0, 0, 0, tau0, pi, col, eo);
+  } else {
+    saltPowers(t, SA);
+    col = pointCol;
+    entropyDirect!(coef, px, px2, px2lnx, tau0, pi, col, eo);
   }
+  const e0 = eo[0], e1 = eo[1], f0 = eo[2];
   const eta = e0; // ∂g/∂τ at (T, p)
   let th = T + (f0 * TU / (e1 * PU)) * (p - P0);
+  const io = eo;
+  // f(τ) = ∂g/∂τ − η on the isobar; io holds f + η, f', ½ f'', ⅙ f'''. The first step is
+  // Chebyshev's (cubic: s = s_N (1 + ρ s_N), s_N = f/f' the Newton step, ρ = ½ f''/f'),
+  // accepted when it is below 10⁻³ K and its cubic error term |2ρ² − ⅙ f'''/f'| |s|³ is below
+  // 10⁻¹⁵ K; the next are Newton's, stopped when the step is below 10⁻¹² K or the quadratic
+  // error left after it, |ρ| s², is below 10⁻¹⁵ K. One division per step.
+  isobarTau = (th - T0) * (1 / TU);
+  isobar!(col, isobarTau, io);
+  let inv = 1 / io[1];
+  let r = io[2] * inv;
+  const sN = (io[0] - eta) * inv;
+  const s0 = sN * (1 + r * sN);
+  th -= TU * s0;
+  if (
+    Math.abs(s0) < 1e-3 / TU &&
+    Math.abs(2 * r * r - io[3] * inv) * Math.abs(s0 * s0 * s0) < 1e-15 / TU
+  ) return th;
   for (let n = 0; n < 30; n++) {
-    const tau = (th - T0) * (1 / TU);
-    let a0 = 0, a1 = 0, a2 = 0;
-    for (let j = J; j > 0; j--) {
-      a2 = a2 * tau + a1;
-      a1 = a1 * tau + a0;
-      a0 = a0 * tau + j * c[j * W];
-    }
-    // On the isobar: a0 = ∂g/∂τ, a1 = ∂²g/∂τ², a2 = ½ ∂³g/∂τ³. Newton step in τ, and the
-    // error left after it, |½ f''/f'| s² (quadratic convergence), as a stopping test.
-    const s = (a0 - eta) / a1;
+    isobarTau = (th - T0) * (1 / TU);
+    isobar!(col, isobarTau, io);
+    inv = 1 / io[1];
+    r = io[2] * inv;
+    const s = (io[0] - eta) * inv;
     th -= TU * s;
-    if (Math.abs(s) < 1e-12 / TU || Math.abs(a2 / a1) * s * s < 1e-15 / TU) return th;
+    if (Math.abs(s) < 1e-12 / TU || Math.abs(r) * s * s < 1e-15 / TU) return th;
   }
   throw new NoPhysicalAnswerError(
     `potential temperature did not converge at S_A ${SA} kg/kg, T ${T} K, p ${p} Pa`,
   );
 }
 
-/** Potential enthalpy h0 = g − θ g_T at (S_A, θ, p0), J/kg, from the collapsed polynomial. */
-function potentialEnthalpy(SA: number, th: number): number {
-  const t = load();
-  const c = collapse(t, SA);
-  const W = t.K + 1;
-  const tau = (th - T0) / TU;
-  let a0 = 0, a1 = 0;
-  for (let j = t.J * W; j >= 0; j -= W) {
-    a1 = a1 * tau + a0;
-    a0 = a0 * tau + c[j];
-  }
-  return a0 - th * a1 / TU;
+/**
+ * Potential enthalpy h0 = g − θ g_T at (S_A, θ, p0), J/kg, for the θ just returned by theta():
+ * g and g_τ by their Taylor series about the τ of theta()'s last isobar evaluation (still in
+ * `eo`), to the fourth power of the last step; that step is below 10⁻³ K when it is the first
+ * (cubic) one and far smaller otherwise, so the series is exact to rounding.
+ */
+function potentialEnthalpy(th: number): number {
+  const d = (th - T0) / TU - isobarTau;
+  const o = eo;
+  const gt = o[0] + d * (o[1] + d * (o[2] + d * o[3]));
+  const g = o[4] + d * (o[0] + d * (0.5 * o[1] + d * (o[2] / 3 + d * 0.25 * o[3])));
+  return g - th * gt / TU;
 }
 
 const SA_RANGE: [number, number] = [0, 0.042];
@@ -291,7 +515,7 @@ export function conservativeTemperature(
 ): number {
   checkState(SA, T, p, options);
   const th = theta(SA, T, p);
-  return potentialEnthalpy(SA, th) / CP0;
+  return potentialEnthalpy(th) / CP0;
 }
 
 /**

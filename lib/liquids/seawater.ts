@@ -32,6 +32,15 @@ interface V75 {
   K: number;
   Su: number;
   dS: number;
+  /** Highest power of τ with a non-zero term, per power k of ζ (the grid is zero beyond it). */
+  jmax: Int8Array;
+  /**
+   * Coefficients cell by cell for evaluating without collapsing: for k from K down to 0, j from
+   * jmax_k down to 0, the cell's v_ijk from the highest i down to i = 0 (zeros fill gaps);
+   * cellLen holds each cell's length in that order.
+   */
+  cells: Float64Array;
+  cellLen: Int8Array;
 }
 let v75: V75 | undefined;
 
@@ -42,6 +51,26 @@ function load(): V75 {
   const sso = d.constants.SSO as number;
   const J = Math.max(...rows.map((r) => r[1]));
   const K = Math.max(...rows.map((r) => r[2]));
+  const jmax = new Int8Array(K + 1);
+  const imax = new Int8Array((J + 1) * (K + 1));
+  for (const [i, j, k] of rows) {
+    jmax[k] = Math.max(jmax[k], j);
+    imax[k * (J + 1) + j] = Math.max(imax[k * (J + 1) + j], i);
+  }
+  const order: number[] = [];
+  for (let k = K; k >= 0; k--) for (let j = jmax[k]; j >= 0; j--) order.push(k * (J + 1) + j);
+  const cellLen = Int8Array.from(order, (c) => imax[c] + 1);
+  const start = new Map<number, number>();
+  let n = 0;
+  for (const c of order) {
+    start.set(c, n);
+    n += imax[c] + 1;
+  }
+  const cells = new Float64Array(n);
+  for (const [i, j, k, v] of rows) {
+    const c = k * (J + 1) + j;
+    cells[start.get(c)! + imax[c] - i] += v;
+  }
   v75 = {
     i: Int8Array.from(rows.map((r) => r[0])),
     j: Int8Array.from(rows.map((r) => r[1])),
@@ -51,22 +80,82 @@ function load(): V75 {
     K,
     Su: 40 * sso / 35,
     dS: d.constants.deltaS as number,
+    jmax,
+    cells,
+    cellLen,
   };
   grid = new Float64Array((J + 1) * (K + 1));
+  evalGrid = build75(v75, true);
+  evalDirect = build75(v75, false);
   return v75;
 }
+
+/** A number as a JavaScript literal that reads back to the same double. */
+function lit(x: number): string {
+  return x < 0 || Object.is(x, -0) ? `(${x})` : String(x);
+}
+
+/** Horner's scheme as one expression: terms from the highest power down, in the variable v. */
+function hornerExpr(terms: string[], v: string): string {
+  let e = terms[0];
+  for (let n = 1; n < terms.length; n++) e = `(${e}) * ${v} + ${terms[n]}`;
+  return e;
+}
+
+/** (grid, s, tau, z, res) => void: generated v and ∂v/∂ζ into res[0], res[1]. */
+type Eval75 = (grid: Float64Array, s: number, tau: number, z: number, res: Float64Array) => void;
+
+/**
+ * Generate, from the coefficient layout, straight-line code for v and ∂v/∂ζ: rows k of ζ as
+ * Horner sums in τ, then Horner in ζ. With `grid` the (k, j) cells are read from the collapsed
+ * grid; otherwise each cell is its own Horner sum in s with the coefficients written in. Generated
+ * once per process: the same sums as loops over the layout, without the loop overhead, which
+ * dominates these short sums.
+ */
+function build75(c: V75, useGrid: boolean): Eval75 {
+  const W = c.J + 1;
+  const lines: string[] = [];
+  const rows: string[] = [], drows: string[] = [];
+  let n = 0, m = 0;
+  for (let k = c.K; k >= 0; k--) {
+    const cs: string[] = [];
+    for (let j = c.jmax[k]; j >= 0; j--) {
+      const terms: string[] = [];
+      for (const e = n + c.cellLen[m++]; n < e; n++) terms.push(lit(c.cells[n]));
+      cs.push(useGrid ? `grid[${k * W + j}]` : `(${hornerExpr(terms, "s")})`);
+    }
+    lines.push(`const r${k} = ${hornerExpr(cs, "tau")};`);
+    rows.push(`r${k}`);
+    if (k > 0) drows.push(`${k} * r${k}`);
+  }
+  lines.push(`res[0] = ${hornerExpr(rows, "z")};`);
+  lines.push(`res[1] = ${drows.length ? hornerExpr(drows, "z") : "0"};`);
+  return new Function("grid", "s", "tau", "z", "res", lines.join("\n")) as Eval75;
+}
+
+let evalGrid: Eval75 | undefined;
+let evalDirect: Eval75 | undefined;
 
 const ps = new Float64Array(8);
 const res = new Float64Array(2);
 /** The polynomial with the salinity sum done at `gridSA`: v = Σ_kj D_kj τ^j ζ^k, row k. */
 let grid = new Float64Array(0);
 let gridSA = Number.NaN;
+/** The salinity of the previous call: the grid is collapsed only when a salinity repeats. */
+let lastSA = Number.NaN;
 
-/** v and ∂v/∂ζ of the 75-term polynomial, into `res`. SA g/kg, CT °C, sea pressure dbar. */
+/**
+ * v and ∂v/∂ζ of the 75-term polynomial, into `res`. SA g/kg, CT °C, sea pressure dbar. While
+ * the salinity stays the same the salinity sum is collapsed once into a (τ, ζ) grid (when a new
+ * salinity comes twice in a row); a salinity that changes at every point is summed directly,
+ * cell by cell, without collapsing.
+ */
 function v75eval(SAgkg: number, CT: number, pdbar: number): Float64Array {
   const c = load();
   const W = c.J + 1;
-  if (SAgkg !== gridSA) {
+  const tau = CT / 40;
+  const z = pdbar * 1e-4;
+  if (SAgkg !== gridSA && SAgkg === lastSA) {
     const s = Math.sqrt((SAgkg + c.dS) / c.Su);
     ps[0] = 1;
     for (let n = 1; n < ps.length; n++) ps[n] = ps[n - 1] * s;
@@ -74,18 +163,9 @@ function v75eval(SAgkg: number, CT: number, pdbar: number): Float64Array {
     for (let n = 0; n < c.v.length; n++) grid[c.k[n] * W + c.j[n]] += c.v[n] * ps[c.i[n]];
     gridSA = SAgkg;
   }
-  const tau = CT / 40;
-  const z = pdbar * 1e-4;
-  // Horner in ζ (value and first derivative) over rows that are Horner sums in τ.
-  let v = 0, dv = 0;
-  for (let k = c.K; k >= 0; k--) {
-    let r = 0;
-    for (let n = k * W + c.J; n >= k * W; n--) r = r * tau + grid[n];
-    dv = dv * z + v;
-    v = v * z + r;
-  }
-  res[0] = v;
-  res[1] = dv;
+  lastSA = SAgkg;
+  if (SAgkg === gridSA) evalGrid!(grid, 0, tau, z, res);
+  else evalDirect!(grid, Math.sqrt((SAgkg + c.dS) / c.Su), tau, z, res);
   return res;
 }
 

@@ -64,15 +64,28 @@ function toDirUrl(dir: string | URL): URL {
 
 /** Canonical JSON: keys sorted at every level, no whitespace. */
 export function canonicalJson(value: unknown): string {
-  if (Array.isArray(value)) return "[" + value.map(canonicalJson).join(",") + "]";
-  if (value !== null && typeof value === "object") {
-    const keys = Object.keys(value as Record<string, unknown>).sort();
-    return "{" +
-      keys.map((k) =>
-        JSON.stringify(k) + ":" + canonicalJson((value as Record<string, unknown>)[k])
-      ).join(",") + "}";
+  // Built by appending to one string (no intermediate arrays): the registry is hashed this way on
+  // every load. Array holes and undefined elements give nothing, as Array#join would.
+  if (value === null || typeof value !== "object") return JSON.stringify(value);
+  if (Array.isArray(value)) {
+    let s = "[";
+    for (let i = 0; i < value.length; i++) {
+      if (i > 0) s += ",";
+      if (i in value) {
+        const c = canonicalJson(value[i]);
+        if (c !== undefined) s += c;
+      }
+    }
+    return s + "]";
   }
-  return JSON.stringify(value);
+  const o = value as Record<string, unknown>;
+  const keys = Object.keys(o).sort();
+  let s = "{";
+  for (let i = 0; i < keys.length; i++) {
+    if (i > 0) s += ",";
+    s += JSON.stringify(keys[i]) + ":" + canonicalJson(o[keys[i]]);
+  }
+  return s + "}";
 }
 
 function deepFreeze<T>(v: T): T {

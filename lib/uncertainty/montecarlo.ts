@@ -15,7 +15,7 @@ import {
   type UncertainInput,
 } from "./inputs.ts";
 import type { MeasurementModel } from "./gum.ts";
-import { randomStream } from "./rng.ts";
+import { normalOf, type RandomState, randomState, uniformOf } from "./rng.ts";
 
 /** Options of {@link monteCarlo}. */
 export interface MonteCarloOptions {
@@ -109,7 +109,7 @@ export function monteCarlo(
     throw new InputError("coverage", String(coverage), "a probability in (0, 1), e.g. 0.95");
   }
   const seed = options.seed ?? 1;
-  const rng = randomStream(seed);
+  const rng = randomState(seed);
 
   // Per-input sampler kind and scale, precomputed.
   const kind = new Uint8Array(n);
@@ -155,65 +155,16 @@ export function monteCarlo(
     z = new Float64Array(g);
     for (const i of members) kind[i] = KIND_CORR;
   }
-  const g = group.length;
 
-  const x = new Float64Array(n);
   const out = new Float64Array(draws);
-  const pi = Math.PI;
-  for (let m = 0; m < draws; m++) {
-    for (let i = 0; i < n; i++) {
-      switch (kind[i]) {
-        case KIND_NORMAL:
-          x[i] = est[i] + scale[i] * rng.normal();
-          break;
-        case KIND_RECT:
-          x[i] = est[i] + scale[i] * (2 * rng.uniform() - 1);
-          break;
-        case KIND_TRI:
-          x[i] = est[i] + scale[i] * (rng.uniform() + rng.uniform() - 1);
-          break;
-        case KIND_U:
-          x[i] = est[i] + scale[i] * Math.cos(pi * rng.uniform());
-          break;
-        case KIND_FIXED:
-          x[i] = est[i];
-          break;
-        default:
-          break; // correlated: below
-      }
-    }
-    if (g > 0) {
-      for (let a = 0; a < g; a++) z[a] = rng.normal();
-      for (let a = 0; a < g; a++) {
-        let s = 0;
-        for (let b = 0; b <= a; b++) s += lower[a * g + b] * z[b];
-        const i = group[a];
-        x[i] = est[i] + scale[i] * s;
-      }
-    }
-    const y = model(x);
-    if (!Number.isFinite(y)) {
-      throw new NoPhysicalAnswerError(
-        `the model gives ${y} for draw ${m + 1} (inputs ${
-          Array.from(x, (v, i) => `${inputs[i].name} = ${v}`).join(", ")
-        })`,
-      );
-    }
-    out[m] = y;
-  }
+  const sampler: Sampler = { n, kind, est, scale, group, lower, z, x: new Float64Array(n) };
+  // The sum is taken in draw order, as a separate pass over `out` would.
+  const sum = drawAll(model, inputs, sampler, rng, out);
 
   // Mean and standard deviation, two passes for accuracy.
-  let sum = 0;
-  for (let m = 0; m < draws; m++) sum += out[m];
   const mean = sum / draws;
-  let ss = 0;
-  for (let m = 0; m < draws; m++) {
-    const d = out[m] - mean;
-    ss += d * d;
-  }
-  const u = Math.sqrt(ss / (draws - 1));
+  const u = Math.sqrt(sumOfSquares(out, mean) / (draws - 1));
 
-  out.sort();
   const pm = coverage * draws;
   const q = Number.isInteger(pm) ? pm : Math.floor(pm + 0.5);
   if (q < 1 || q >= draws) {
@@ -221,7 +172,16 @@ export function monteCarlo(
   }
   // 1-based r per JCGM 101 §7.7.1; array index r − 1.
   const r = (draws - q) % 2 === 0 ? (draws - q) / 2 : (draws - q + 1) / 2;
-  const symmetric: [number, number] = [out[r - 1], out[r - 1 + q]];
+  const fullSort = options.shortest === true || options.keepValues === true;
+  if (fullSort) out.sort();
+  else {
+    // Only two order statistics are needed: select them (linear time) instead of sorting.
+    selectInPlace(out, r - 1, 0, draws - 1);
+    selectInPlace(out, r - 1 + q, r, draws - 1);
+  }
+  const symmetric: [number, number] = fullSort
+    ? [out[r - 1], out[r - 1 + q]]
+    : [signedZeroAt(out, r - 1), signedZeroAt(out, r - 1 + q)];
   let interval: [number, number] = symmetric;
   if (options.shortest) {
     let best = 0, width = Infinity;
@@ -242,7 +202,156 @@ export function monteCarlo(
     symmetricInterval: symmetric,
     coverage,
     draws,
-    seed: rng.seed,
+    seed: seed >>> 0,
     ...(options.keepValues ? { values: out } : {}),
   };
+}
+
+/** What one draw needs, precomputed per run. */
+interface Sampler {
+  readonly n: number;
+  readonly kind: Uint8Array;
+  readonly est: Float64Array;
+  readonly scale: Float64Array;
+  /** Indices of the correlated normal inputs. */
+  readonly group: Int32Array;
+  /** Cholesky factor of their correlation matrix, row-major. */
+  readonly lower: Float64Array;
+  /** Scratch: independent normal deviates of the correlated group. */
+  readonly z: Float64Array;
+  /** Scratch: the input vector handed to the model. */
+  readonly x: Float64Array;
+}
+
+/**
+ * Draw every input vector, evaluate the model and store the outputs (a small function of its
+ * own, so that the optimising compiler, which compiles it while it runs, compiles only the loop).
+ *
+ * @returns the sum of the outputs in draw order
+ */
+function drawAll(
+  model: MeasurementModel,
+  inputs: readonly UncertainInput[],
+  sp: Sampler,
+  rng: RandomState,
+  out: Float64Array,
+): number {
+  const { n, kind, est, scale, group, lower, z, x } = sp;
+  const { words, spare } = rng;
+  const g = group.length;
+  const pi = Math.PI;
+  const draws = out.length;
+  let sum = 0;
+  for (let m = 0; m < draws; m++) {
+    for (let i = 0; i < n; i++) {
+      switch (kind[i]) {
+        case KIND_NORMAL:
+          x[i] = est[i] + scale[i] * normalOf(words, spare);
+          break;
+        case KIND_RECT:
+          x[i] = est[i] + scale[i] * (2 * uniformOf(words) - 1);
+          break;
+        case KIND_TRI:
+          x[i] = est[i] + scale[i] * (uniformOf(words) + uniformOf(words) - 1);
+          break;
+        case KIND_U:
+          x[i] = est[i] + scale[i] * Math.cos(pi * uniformOf(words));
+          break;
+        case KIND_FIXED:
+          x[i] = est[i];
+          break;
+        default:
+          break; // correlated: below
+      }
+    }
+    if (g > 0) {
+      for (let a = 0; a < g; a++) z[a] = normalOf(words, spare);
+      for (let a = 0; a < g; a++) {
+        let s = 0;
+        for (let b = 0; b <= a; b++) s += lower[a * g + b] * z[b];
+        const i = group[a];
+        x[i] = est[i] + scale[i] * s;
+      }
+    }
+    const y = model(x);
+    if (!Number.isFinite(y)) {
+      throw new NoPhysicalAnswerError(
+        `the model gives ${y} for draw ${m + 1} (inputs ${
+          Array.from(x, (v, i) => `${inputs[i].name} = ${v}`).join(", ")
+        })`,
+      );
+    }
+    out[m] = y;
+    sum += y;
+  }
+  return sum;
+}
+
+/** Σ (y − mean)², in index order. */
+function sumOfSquares(out: Float64Array, mean: number): number {
+  let ss = 0;
+  for (let m = 0; m < out.length; m++) {
+    const d = out[m] - mean;
+    ss += d * d;
+  }
+  return ss;
+}
+
+/**
+ * Rearrange `a[lo..hi]` so that `a[k]` holds the value a full ascending sort would put there,
+ * with nothing greater before it and nothing smaller after it (Hoare's selection, FIND, with a
+ * median-of-three pivot). Falls back to sorting the remaining range after many passes, so the
+ * cost stays O(n log n) at worst. Zeros of either sign compare equal here; see
+ * {@link signedZeroAt}.
+ */
+function selectInPlace(a: Float64Array, k: number, lo: number, hi: number): void {
+  let l = lo, ir = hi;
+  for (let pass = 0;; pass++) {
+    if (ir <= l + 1) {
+      if (ir === l + 1 && a[ir] < a[l]) swap(a, l, ir);
+      return;
+    }
+    if (pass === 64) {
+      a.subarray(l, ir + 1).sort();
+      return;
+    }
+    swap(a, (l + ir) >>> 1, l + 1);
+    if (a[l] > a[ir]) swap(a, l, ir);
+    if (a[l + 1] > a[ir]) swap(a, l + 1, ir);
+    if (a[l] > a[l + 1]) swap(a, l, l + 1);
+    let i = l + 1, j = ir;
+    const pivot = a[l + 1];
+    for (;;) {
+      do i++; while (a[i] < pivot);
+      do j--; while (a[j] > pivot);
+      if (j < i) break;
+      swap(a, i, j);
+    }
+    a[l + 1] = a[j];
+    a[j] = pivot;
+    if (j >= k) ir = j - 1;
+    if (j <= k) l = i;
+  }
+}
+
+function swap(a: Float64Array, i: number, j: number): void {
+  const t = a[i];
+  a[i] = a[j];
+  a[j] = t;
+}
+
+/**
+ * `a[k]` after {@link selectInPlace}, with the sign of a zero a full sort would give (a sort
+ * puts −0 before +0; selection cannot tell them apart).
+ */
+function signedZeroAt(a: Float64Array, k: number): number {
+  const v = a[k];
+  if (v !== 0) return v;
+  let below = 0, negZero = 0;
+  for (let m = 0; m < a.length; m++) {
+    const x = a[m];
+    if (x < 0) below++;
+    else if (x === 0 && Object.is(x, -0)) negZero++;
+  }
+  return k >= below && k < below + negZero ? -0 : 0;
 }

@@ -13,7 +13,7 @@
  */
 import { InputError } from "../errors.ts";
 
-/** A seeded random stream. Its state lives in the closure; nothing is allocated per call. */
+/** A seeded random stream. Its state lives in typed arrays; nothing is allocated per call. */
 export interface RandomStream {
   /** The seed the stream started from (an unsigned 32-bit integer). */
   readonly seed: number;
@@ -27,6 +27,136 @@ export interface RandomStream {
 
 const TWO_POW_26 = 67108864;
 const TWO_POW_53 = 9007199254740992;
+
+/**
+ * The state of a xoshiro128** stream in typed arrays (numbers kept in closure variables or object
+ * fields outside the small-integer range are boxed on every write; typed arrays are not).
+ */
+export interface RandomState {
+  /** The four 32-bit state words. */
+  readonly words: Int32Array;
+  /** [the spare normal deviate of the last polar pair, 1 while it is unused else 0]. */
+  readonly spare: Float64Array;
+}
+
+function checkSeed(seed: number): void {
+  if (!Number.isInteger(seed) || seed < 0 || seed > 0xffffffff) {
+    throw new InputError("seed", String(seed), "an integer from 0 to 4294967295");
+  }
+}
+
+/**
+ * Seed a xoshiro128** state through SplitMix32 (the state {@link randomStream} uses; the
+ * functions {@link nextUint32Of}, {@link uniformOf} and {@link normalOf} advance it).
+ *
+ * Method: SplitMix32 mixing of the seed into four words (never all zero). Validity: any
+ * unsigned 32-bit integer seed. Source: jcgm-101-2008 (§6.3, requirements on the generator).
+ *
+ * @param seed unsigned 32-bit integer seed (dimensionless)
+ * @returns a fresh state
+ * @throws {InputError} when the seed is not an integer in 0 … 2^32 − 1
+ *
+ * @example
+ * ```ts
+ * import { randomState, randomStream, uniformOf } from "./rng.ts";
+ * if (uniformOf(randomState(5).words) !== randomStream(5).uniform()) throw new Error("same stream");
+ * ```
+ */
+export function randomState(seed: number): RandomState {
+  checkSeed(seed);
+  let sm = seed >>> 0;
+  const mix = (): number => {
+    sm = (sm + 0x9e3779b9) >>> 0;
+    let z = sm;
+    z = Math.imul(z ^ (z >>> 16), 0x85ebca6b);
+    z = Math.imul(z ^ (z >>> 13), 0xc2b2ae35);
+    return (z ^ (z >>> 16)) >>> 0;
+  };
+  const words = new Int32Array(4);
+  words[0] = mix();
+  words[1] = mix();
+  words[2] = mix();
+  words[3] = mix();
+  if ((words[0] | words[1] | words[2] | words[3]) === 0) words[0] = 1;
+  return { words, spare: new Float64Array(2) };
+}
+
+/**
+ * Advance a state by one xoshiro128** step (Blackman & Vigna 2018).
+ *
+ * @param w the state's words ({@link RandomState}`.words`, changed)
+ * @returns the next raw 32-bit output, as an unsigned integer
+ *
+ * @example
+ * ```ts
+ * import { nextUint32Of, randomState } from "./rng.ts";
+ * const x = nextUint32Of(randomState(1).words);
+ * if (!(Number.isInteger(x) && x >= 0 && x < 2 ** 32)) throw new Error();
+ * ```
+ */
+export function nextUint32Of(w: Int32Array): number {
+  const s0 = w[0], s1 = w[1];
+  const m = Math.imul(s1, 5);
+  const r = Math.imul((m << 7) | (m >>> 25), 9) >>> 0;
+  const s2 = w[2] ^ s0;
+  const s3 = w[3] ^ s1;
+  w[1] = s1 ^ s2;
+  w[0] = s0 ^ s3;
+  w[2] = s2 ^ (s1 << 9);
+  w[3] = (s3 << 11) | (s3 >>> 21);
+  return r;
+}
+
+/**
+ * Next uniform deviate of a state: 53 random bits from two outputs, in the open interval (0, 1).
+ *
+ * @param w the state's words ({@link RandomState}`.words`, changed)
+ * @returns a uniform deviate in (0, 1)
+ *
+ * @example
+ * ```ts
+ * import { randomState, uniformOf } from "./rng.ts";
+ * const u = uniformOf(randomState(2).words);
+ * if (!(u > 0 && u < 1)) throw new Error();
+ * ```
+ */
+export function uniformOf(w: Int32Array): number {
+  const hi = nextUint32Of(w) >>> 5; // 27 bits
+  const lo = nextUint32Of(w) >>> 6; // 26 bits
+  return (hi * TWO_POW_26 + lo + 0.5) / TWO_POW_53;
+}
+
+/**
+ * Next standard normal deviate of a state by the Marsaglia polar method; the second deviate of
+ * each pair is kept in the state for the next call.
+ *
+ * @param w the state's words ({@link RandomState}`.words`, changed)
+ * @param sp the state's spare ({@link RandomState}`.spare`, changed)
+ * @returns a standard normal deviate (mean 0, standard deviation 1)
+ *
+ * @example
+ * ```ts
+ * import { normalOf, randomState } from "./rng.ts";
+ * const st = randomState(3);
+ * if (!Number.isFinite(normalOf(st.words, st.spare))) throw new Error();
+ * ```
+ */
+export function normalOf(w: Int32Array, sp: Float64Array): number {
+  if (sp[1] === 1) {
+    sp[1] = 0;
+    return sp[0];
+  }
+  let u: number, v: number, q: number;
+  do {
+    u = 2 * uniformOf(w) - 1;
+    v = 2 * uniformOf(w) - 1;
+    q = u * u + v * v;
+  } while (q >= 1 || q === 0);
+  const f = Math.sqrt(-2 * Math.log(q) / q);
+  sp[0] = v * f;
+  sp[1] = 1;
+  return u * f;
+}
 
 /**
  * Create a seeded xoshiro128** stream.
@@ -48,55 +178,11 @@ const TWO_POW_53 = 9007199254740992;
  * ```
  */
 export function randomStream(seed: number): RandomStream {
-  if (!Number.isInteger(seed) || seed < 0 || seed > 0xffffffff) {
-    throw new InputError("seed", String(seed), "an integer from 0 to 4294967295");
-  }
-  // SplitMix32 fills the state; it never yields four zero words.
-  let sm = seed >>> 0;
-  const mix = (): number => {
-    sm = (sm + 0x9e3779b9) >>> 0;
-    let z = sm;
-    z = Math.imul(z ^ (z >>> 16), 0x85ebca6b);
-    z = Math.imul(z ^ (z >>> 13), 0xc2b2ae35);
-    return (z ^ (z >>> 16)) >>> 0;
+  const { words, spare } = randomState(seed);
+  return {
+    seed: seed >>> 0,
+    nextUint32: () => nextUint32Of(words),
+    uniform: () => uniformOf(words),
+    normal: () => normalOf(words, spare),
   };
-  let s0 = mix(), s1 = mix(), s2 = mix(), s3 = mix();
-  if ((s0 | s1 | s2 | s3) === 0) s0 = 1;
-
-  const nextUint32 = (): number => {
-    const m = Math.imul(s1, 5);
-    const r = Math.imul((m << 7) | (m >>> 25), 9) >>> 0;
-    const t = s1 << 9;
-    s2 ^= s0;
-    s3 ^= s1;
-    s1 ^= s2;
-    s0 ^= s3;
-    s2 ^= t;
-    s3 = (s3 << 11) | (s3 >>> 21);
-    return r;
-  };
-  const uniform = (): number => {
-    const hi = nextUint32() >>> 5; // 27 bits
-    const lo = nextUint32() >>> 6; // 26 bits
-    return (hi * TWO_POW_26 + lo + 0.5) / TWO_POW_53;
-  };
-  let spare = 0;
-  let hasSpare = false;
-  const normal = (): number => {
-    if (hasSpare) {
-      hasSpare = false;
-      return spare;
-    }
-    let u: number, v: number, s: number;
-    do {
-      u = 2 * uniform() - 1;
-      v = 2 * uniform() - 1;
-      s = u * u + v * v;
-    } while (s >= 1 || s === 0);
-    const f = Math.sqrt(-2 * Math.log(s) / s);
-    spare = v * f;
-    hasSpare = true;
-    return u * f;
-  };
-  return { seed: seed >>> 0, nextUint32, uniform, normal };
 }
