@@ -10,7 +10,13 @@
  *
  * @module
  */
-import { checkRange, InputError, NoPhysicalAnswerError, type ValidityOptions } from "../errors.ts";
+import {
+  checkRange,
+  InputError,
+  NoPhysicalAnswerError,
+  RegistryError,
+  type ValidityOptions,
+} from "../errors.ts";
 import { defaultRegistry } from "../registry/mod.ts";
 import { trace, type TraceEntry } from "../trace.ts";
 import { conservativeTemperature, densityGibbs, P0, soundSpeedGibbs, T0 } from "./gibbs.ts";
@@ -23,10 +29,6 @@ export type SeawaterFormulation = "teos10" | "teos10-gibbs" | "unesco1983";
 export const UPS = 35.16504 / 35;
 
 interface V75 {
-  i: Int8Array;
-  j: Int8Array;
-  k: Int8Array;
-  v: Float64Array;
   /** Highest power of τ and of ζ. */
   J: number;
   K: number;
@@ -35,7 +37,7 @@ interface V75 {
   /** Highest power of τ with a non-zero term, per power k of ζ (the grid is zero beyond it). */
   jmax: Int8Array;
   /**
-   * Coefficients cell by cell for evaluating without collapsing: for k from K down to 0, j from
+   * Coefficients cell by cell, for generating the collapse: for k from K down to 0, j from
    * jmax_k down to 0, the cell's v_ijk from the highest i down to i = 0 (zeros fill gaps);
    * cellLen holds each cell's length in that order.
    */
@@ -43,6 +45,8 @@ interface V75 {
   cellLen: Int8Array;
 }
 let v75: V75 | undefined;
+const DATA_FILE = "data/seawater/teos10_75term.yaml";
+const DATA_ID = "seawater-teos10-75term";
 
 function load(): V75 {
   if (v75) return v75;
@@ -72,10 +76,6 @@ function load(): V75 {
     cells[start.get(c)! + imax[c] - i] += v;
   }
   v75 = {
-    i: Int8Array.from(rows.map((r) => r[0])),
-    j: Int8Array.from(rows.map((r) => r[1])),
-    k: Int8Array.from(rows.map((r) => r[2])),
-    v: Float64Array.from(rows.map((r) => r[3])),
     J,
     K,
     Su: 40 * sso / 35,
@@ -85,36 +85,67 @@ function load(): V75 {
     cellLen,
   };
   grid = new Float64Array((J + 1) * (K + 1));
-  evalGrid = build75(v75, true);
-  evalDirect = build75(v75, false);
+  const gen = build75(v75);
+  evalGrid = gen.evaluate;
+  collapse75 = gen.collapse;
   return v75;
 }
 
 /** A number as a JavaScript literal that reads back to the same double. */
 function lit(x: number): string {
+  // Only finite numbers ever reach generated code: the coefficient tables come from the
+  // registry (validated, or read from the snapshot), so refuse anything else outright.
+  if (typeof x !== "number" || !Number.isFinite(x)) {
+    throw new RegistryError(
+      "seawater coefficients",
+      "(table)",
+      "value",
+      `not a finite number: ${typeof x}`,
+    );
+  }
   return x < 0 || Object.is(x, -0) ? `(${x})` : String(x);
 }
 
-/** Horner's scheme as one expression: terms from the highest power down, in the variable v. */
-function hornerExpr(terms: string[], v: string): string {
-  let e = terms[0];
-  for (let n = 1; n < terms.length; n++) e = `(${e}) * ${v} + ${terms[n]}`;
-  return e;
+/**
+ * A polynomial as one expression by Estrin's scheme (halves joined by v², v⁴, v⁸, so that the
+ * products run side by side instead of in one long Horner chain): `terms` from the highest power
+ * down, in the variable v; the generated code defines the powers with {@link powers}.
+ */
+function polyExpr(terms: string[], v: string): string {
+  if (terms.length > 16) {
+    throw new RegistryError(DATA_FILE, DATA_ID, "coefficients", "more than 16 powers in one sum");
+  }
+  const power = (m: number): string => (m === 1 ? v : `${v}_${m}`);
+  const build = (c: string[]): string => {
+    if (c.length === 1) return c[0];
+    let m = 1;
+    while (2 * m < c.length) m *= 2;
+    return `(${build(c.slice(0, m))}) + ${power(m)} * (${build(c.slice(m))})`;
+  };
+  return build([...terms].reverse());
 }
 
-/** (grid, s, tau, z, res) => void: generated v and ∂v/∂ζ into res[0], res[1]. */
-type Eval75 = (grid: Float64Array, s: number, tau: number, z: number, res: Float64Array) => void;
+/** Code defining v_2 = v², v_4 = v⁴ and v_8 = v⁸ for polyExpr. */
+function powers(v: string): string {
+  return `const ${v}_2 = ${v} * ${v}, ${v}_4 = ${v}_2 * ${v}_2, ${v}_8 = ${v}_4 * ${v}_4;`;
+}
+
+/** (grid, tau, z, res) => void: generated v and ∂v/∂ζ from the grid into res[0], res[1]. */
+type Eval75 = (grid: Float64Array, tau: number, z: number, res: Float64Array) => void;
+/** (grid, s) => void: generated salinity sums of the cells into the grid. */
+type Collapse75 = (grid: Float64Array, s: number) => void;
 
 /**
- * Generate, from the coefficient layout, straight-line code for v and ∂v/∂ζ: rows k of ζ as
- * Horner sums in τ, then Horner in ζ. With `grid` the (k, j) cells are read from the collapsed
- * grid; otherwise each cell is its own Horner sum in s with the coefficients written in. Generated
- * once per process: the same sums as loops over the layout, without the loop overhead, which
- * dominates these short sums.
+ * Generate, from the coefficient layout, straight-line code for (a) the collapse: each (k, j)
+ * cell's polynomial in s into the (τ, ζ) grid, and (b) v and ∂v/∂ζ from the grid: rows k of ζ as
+ * polynomials in τ, then in ζ. Estrin's scheme throughout (see polyExpr). Generated once per
+ * process: the same sums as loops over the layout, without the loop overhead and the long
+ * dependency chains of Horner's scheme, which dominate these short sums.
  */
-function build75(c: V75, useGrid: boolean): Eval75 {
+function build75(c: V75): { evaluate: Eval75; collapse: Collapse75 } {
   const W = c.J + 1;
-  const lines: string[] = [];
+  const ev: string[] = [powers("tau"), powers("z")];
+  const co: string[] = [powers("s")];
   const rows: string[] = [], drows: string[] = [];
   let n = 0, m = 0;
   for (let k = c.K; k >= 0; k--) {
@@ -122,50 +153,46 @@ function build75(c: V75, useGrid: boolean): Eval75 {
     for (let j = c.jmax[k]; j >= 0; j--) {
       const terms: string[] = [];
       for (const e = n + c.cellLen[m++]; n < e; n++) terms.push(lit(c.cells[n]));
-      cs.push(useGrid ? `grid[${k * W + j}]` : `(${hornerExpr(terms, "s")})`);
+      co.push(`grid[${k * W + j}] = ${polyExpr(terms, "s")};`);
+      cs.push(`grid[${k * W + j}]`);
     }
-    lines.push(`const r${k} = ${hornerExpr(cs, "tau")};`);
+    ev.push(`const r${k} = ${polyExpr(cs, "tau")};`);
     rows.push(`r${k}`);
     if (k > 0) drows.push(`${k} * r${k}`);
   }
-  lines.push(`res[0] = ${hornerExpr(rows, "z")};`);
-  lines.push(`res[1] = ${drows.length ? hornerExpr(drows, "z") : "0"};`);
-  return new Function("grid", "s", "tau", "z", "res", lines.join("\n")) as Eval75;
+  ev.push(`res[0] = ${polyExpr(rows, "z")};`);
+  ev.push(`res[1] = ${drows.length ? polyExpr(drows, "z") : "0"};`);
+  return {
+    evaluate: new Function("grid", "tau", "z", "res", ev.join("\n")) as Eval75,
+    collapse: new Function("grid", "s", co.join("\n")) as Collapse75,
+  };
 }
 
 let evalGrid: Eval75 | undefined;
-let evalDirect: Eval75 | undefined;
-
-const ps = new Float64Array(8);
+let collapse75: Collapse75 | undefined;
 const res = new Float64Array(2);
-/** The polynomial with the salinity sum done at `gridSA`: v = Σ_kj D_kj τ^j ζ^k, row k. */
+/** The polynomial with the salinity sum done at gridSA[0]: v = Σ_kj D_kj τ^j ζ^k, row k. */
 let grid = new Float64Array(0);
-let gridSA = Number.NaN;
-/** The salinity of the previous call: the grid is collapsed only when a salinity repeats. */
-let lastSA = Number.NaN;
+/** The grid's salinity, g/kg (in a typed array: a module-level `let` number is boxed on write). */
+const gridSA = Float64Array.of(Number.NaN);
 
 /**
- * v and ∂v/∂ζ of the 75-term polynomial, into `res`. SA g/kg, CT °C, sea pressure dbar. While
- * the salinity stays the same the salinity sum is collapsed once into a (τ, ζ) grid (when a new
- * salinity comes twice in a row); a salinity that changes at every point is summed directly,
- * cell by cell, without collapsing.
+ * Collapse the salinity sum of the 75-term polynomial at S_A (g/kg) into the (τ, ζ) grid unless
+ * it is already there: straight-line code, about as cheap as summing the cells in place, so it
+ * is done for every new salinity. Callers that know S_A before Θ call it first, so that this
+ * work does not wait for Θ.
  */
-function v75eval(SAgkg: number, CT: number, pdbar: number): Float64Array {
+function prepare75(SAgkg: number): void {
+  if (SAgkg === gridSA[0]) return;
   const c = load();
-  const W = c.J + 1;
-  const tau = CT / 40;
-  const z = pdbar * 1e-4;
-  if (SAgkg !== gridSA && SAgkg === lastSA) {
-    const s = Math.sqrt((SAgkg + c.dS) / c.Su);
-    ps[0] = 1;
-    for (let n = 1; n < ps.length; n++) ps[n] = ps[n - 1] * s;
-    grid.fill(0);
-    for (let n = 0; n < c.v.length; n++) grid[c.k[n] * W + c.j[n]] += c.v[n] * ps[c.i[n]];
-    gridSA = SAgkg;
-  }
-  lastSA = SAgkg;
-  if (SAgkg === gridSA) evalGrid!(grid, 0, tau, z, res);
-  else evalDirect!(grid, Math.sqrt((SAgkg + c.dS) / c.Su), tau, z, res);
+  collapse75!(grid, Math.sqrt((SAgkg + c.dS) / c.Su));
+  gridSA[0] = SAgkg;
+}
+
+/** v and ∂v/∂ζ of the 75-term polynomial, into `res`. SA g/kg, CT °C, sea pressure dbar. */
+function v75eval(SAgkg: number, CT: number, pdbar: number): Float64Array {
+  prepare75(SAgkg);
+  evalGrid!(grid, CT / 40, pdbar * 1e-4, res);
   return res;
 }
 
@@ -299,6 +326,7 @@ function soundSpeed(
   switch (formulation) {
     case "teos10": {
       const SA = absoluteSalinity(S, options);
+      prepare75(SA * 1000);
       checkRange("temperature", T, T75K, "K", NAME75, options);
       const CT = conservativeTemperature(SA, T, p, options);
       return soundSpeed75(SA, CT, p - P0, options);
@@ -349,6 +377,7 @@ function density(
   if (formulation !== "teos10") {
     throw new InputError("formulation", JSON.stringify(formulation), "teos10 or teos10-gibbs");
   }
+  prepare75(SA * 1000);
   checkRange("temperature", T, T75K, "K", NAME75, options);
   const CT = conservativeTemperature(SA, T, p, options);
   return 1 / specificVolume75(SA, CT, p - P0, options);
