@@ -68,19 +68,32 @@ const EXT: Record<Format, string> = {
   csv: "csv",
 };
 
-/** Write a file atomically: a temporary file in the same folder, then rename. */
-async function writeAtomic(path: string, text: string): Promise<void> {
+const madeDirs = new Set<string>();
+
+/**
+ * Write a file atomically: a temporary file in the same folder, then rename. Synchronous calls:
+ * in a fleet they are cheaper than the asynchronous ones, and the run is sequential anyway.
+ */
+function writeAtomic(path: string, text: string): Promise<void> {
   const slash = path.lastIndexOf("/");
   const dir = slash >= 0 ? path.slice(0, slash) || "/" : ".";
-  await Deno.mkdir(dir, { recursive: true });
+  if (!madeDirs.has(dir)) {
+    Deno.mkdirSync(dir, { recursive: true });
+    madeDirs.add(dir);
+  }
   const tmp = `${dir}/.${path.slice(slash + 1)}.${crypto.randomUUID().slice(0, 8)}.tmp`;
   try {
-    await Deno.writeTextFile(tmp, text);
-    await Deno.rename(tmp, path);
+    Deno.writeTextFileSync(tmp, text);
+    Deno.renameSync(tmp, path);
   } catch (e) {
-    await Deno.remove(tmp).catch(() => {});
+    try {
+      Deno.removeSync(tmp);
+    } catch {
+      // nothing was written
+    }
     throw e;
   }
+  return Promise.resolve();
 }
 
 function safeName(s: string): string {
