@@ -16,6 +16,7 @@ import {
   type ValidityOptions,
 } from "../errors.ts";
 import { defaultRegistry } from "../registry/mod.ts";
+import { lit, polyExpr, powers } from "./codegen.ts";
 
 /** Standard atmosphere, Pa. */
 export const P0 = 101325;
@@ -68,6 +69,7 @@ interface GibbsTables {
 let tables: GibbsTables | undefined;
 const DATA_FILE = "data/seawater/iapws08_saline.yaml";
 const DATA_ID = "seawater-iapws08-saline";
+const WHERE = { file: DATA_FILE, entry: DATA_ID };
 
 function load(): GibbsTables {
   if (tables) return tables;
@@ -136,45 +138,6 @@ function load(): GibbsTables {
   return tables;
 }
 
-/** A number as a JavaScript literal that reads back to the same double. */
-function lit(x: number): string {
-  // Only finite numbers ever reach generated code: the coefficient tables come from the
-  // registry (validated, or read from the snapshot), so refuse anything else outright.
-  if (typeof x !== "number" || !Number.isFinite(x)) {
-    throw new RegistryError(
-      "seawater coefficients",
-      "(table)",
-      "value",
-      `not a finite number: ${typeof x}`,
-    );
-  }
-  return x < 0 || Object.is(x, -0) ? `(${x})` : String(x);
-}
-
-/**
- * A polynomial as one expression by Estrin's scheme (halves joined by v², v⁴, v⁸, so that the
- * products run side by side instead of in one long Horner chain): `terms` from the highest power
- * down, in the variable v; the generated code defines the powers with {@link powers}.
- */
-function polyExpr(terms: string[], v: string): string {
-  if (terms.length > 16) {
-    throw new RegistryError(DATA_FILE, DATA_ID, "coefficients", "more than 16 powers in one sum");
-  }
-  const power = (m: number): string => (m === 1 ? v : `${v}_${m}`);
-  const build = (c: string[]): string => {
-    if (c.length === 1) return c[0];
-    let m = 1;
-    while (2 * m < c.length) m *= 2;
-    return `(${build(c.slice(0, m))}) + ${power(m)} * (${build(c.slice(m))})`;
-  };
-  return build([...terms].reverse());
-}
-
-/** Code defining v_2 = v², v_4 = v⁴ and v_8 = v⁸ for polyExpr. */
-function powers(v: string): string {
-  return `const ${v}_2 = ${v} * ${v}, ${v}_4 = ${v}_2 * ${v}_2, ${v}_8 = ${v}_4 * ${v}_4;`;
-}
-
 /** (c, x, x2, x2lnx, tau, pi, col, o) => void: a generated pass of buildPass(). */
 type GibbsPass = (
   c: Float64Array,
@@ -207,7 +170,7 @@ function buildPass(t: GibbsTables, grid: boolean, full: boolean): GibbsPass {
     const g: string[] = [];
     for (let n = t.cellOff[c]; n < t.cellOff[c + 1]; n++) g.push(lit(t.cellG[n]));
     let e = lit(t.cellW[c]);
-    if (g.length) e += ` + x2 * (${polyExpr(g, "x")})`;
+    if (g.length) e += ` + x2 * (${polyExpr(g, "x", WHERE)})`;
     if (k === 0 && t.lnRow[j] !== 0) e += ` + ${lit(t.lnRow[j])} * x2lnx`;
     return e;
   };
@@ -227,12 +190,12 @@ function buildPass(t: GibbsTables, grid: boolean, full: boolean): GibbsPass {
       if (k > 1) es.push(`${k * (k - 1)} * c${j}_${k}`);
     }
     if (!grid) lines.push(`col[${j}] = c${j}_0;`);
-    lines.push(`const q${j} = ${polyExpr(cs, "pi")};`);
+    lines.push(`const q${j} = ${polyExpr(cs, "pi", WHERE)};`);
     if (outs.some(([, r]) => r === "d")) {
-      lines.push(`const d${j} = ${ds.length ? polyExpr(ds, "pi") : "0"};`);
+      lines.push(`const d${j} = ${ds.length ? polyExpr(ds, "pi", WHERE) : "0"};`);
     }
     if (outs.some(([, r]) => r === "e")) {
-      lines.push(`const e${j} = ${es.length ? polyExpr(es, "pi") : "0"};`);
+      lines.push(`const e${j} = ${es.length ? polyExpr(es, "pi", WHERE) : "0"};`);
     }
     outs.forEach(([m, r], n) => {
       if (j < m) return;
@@ -242,7 +205,9 @@ function buildPass(t: GibbsTables, grid: boolean, full: boolean): GibbsPass {
     });
   }
   if (!grid && jLow > 0) lines.push(`col[0] = ${cell(0, 0)};`);
-  terms.forEach((ts, n) => lines.push(`o[${n}] = ${ts.length ? polyExpr(ts, "tau") : "0"};`));
+  terms.forEach((ts, n) =>
+    lines.push(`o[${n}] = ${ts.length ? polyExpr(ts, "tau", WHERE) : "0"};`)
+  );
   return new Function(
     "c",
     "x",
@@ -275,7 +240,7 @@ function buildIsobar(J: number): Isobar {
       const mult = m === 0 ? 1 : m * binom;
       terms.push(mult === 1 ? `col[${j}]` : `${mult} * col[${j}]`);
     }
-    lines.push(`o[${d}] = ${terms.length ? polyExpr(terms, "tau") : "0"};`);
+    lines.push(`o[${d}] = ${terms.length ? polyExpr(terms, "tau", WHERE) : "0"};`);
   });
   return new Function("col", "tau", "o", lines.join("\n")) as Isobar;
 }

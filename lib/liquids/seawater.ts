@@ -10,17 +10,12 @@
  *
  * @module
  */
-import {
-  checkRange,
-  InputError,
-  NoPhysicalAnswerError,
-  RegistryError,
-  type ValidityOptions,
-} from "../errors.ts";
+import { checkRange, InputError, NoPhysicalAnswerError, type ValidityOptions } from "../errors.ts";
 import { defaultRegistry } from "../registry/mod.ts";
 import { trace, type TraceEntry } from "../trace.ts";
 import { conservativeTemperature, densityGibbs, P0, soundSpeedGibbs, T0 } from "./gibbs.ts";
 import { soundSpeedUnesco1983 } from "./unesco.ts";
+import { lit, polyExpr, powers } from "./codegen.ts";
 
 /** Seawater sound-speed formulations. */
 export type SeawaterFormulation = "teos10" | "teos10-gibbs" | "unesco1983";
@@ -47,6 +42,7 @@ interface V75 {
 let v75: V75 | undefined;
 const DATA_FILE = "data/seawater/teos10_75term.yaml";
 const DATA_ID = "seawater-teos10-75term";
+const WHERE = { file: DATA_FILE, entry: DATA_ID };
 
 function load(): V75 {
   if (v75) return v75;
@@ -91,45 +87,6 @@ function load(): V75 {
   return v75;
 }
 
-/** A number as a JavaScript literal that reads back to the same double. */
-function lit(x: number): string {
-  // Only finite numbers ever reach generated code: the coefficient tables come from the
-  // registry (validated, or read from the snapshot), so refuse anything else outright.
-  if (typeof x !== "number" || !Number.isFinite(x)) {
-    throw new RegistryError(
-      "seawater coefficients",
-      "(table)",
-      "value",
-      `not a finite number: ${typeof x}`,
-    );
-  }
-  return x < 0 || Object.is(x, -0) ? `(${x})` : String(x);
-}
-
-/**
- * A polynomial as one expression by Estrin's scheme (halves joined by v², v⁴, v⁸, so that the
- * products run side by side instead of in one long Horner chain): `terms` from the highest power
- * down, in the variable v; the generated code defines the powers with {@link powers}.
- */
-function polyExpr(terms: string[], v: string): string {
-  if (terms.length > 16) {
-    throw new RegistryError(DATA_FILE, DATA_ID, "coefficients", "more than 16 powers in one sum");
-  }
-  const power = (m: number): string => (m === 1 ? v : `${v}_${m}`);
-  const build = (c: string[]): string => {
-    if (c.length === 1) return c[0];
-    let m = 1;
-    while (2 * m < c.length) m *= 2;
-    return `(${build(c.slice(0, m))}) + ${power(m)} * (${build(c.slice(m))})`;
-  };
-  return build([...terms].reverse());
-}
-
-/** Code defining v_2 = v², v_4 = v⁴ and v_8 = v⁸ for polyExpr. */
-function powers(v: string): string {
-  return `const ${v}_2 = ${v} * ${v}, ${v}_4 = ${v}_2 * ${v}_2, ${v}_8 = ${v}_4 * ${v}_4;`;
-}
-
 /** (grid, tau, z, res) => void: generated v and ∂v/∂ζ from the grid into res[0], res[1]. */
 type Eval75 = (grid: Float64Array, tau: number, z: number, res: Float64Array) => void;
 /** (grid, s) => void: generated salinity sums of the cells into the grid. */
@@ -153,15 +110,15 @@ function build75(c: V75): { evaluate: Eval75; collapse: Collapse75 } {
     for (let j = c.jmax[k]; j >= 0; j--) {
       const terms: string[] = [];
       for (const e = n + c.cellLen[m++]; n < e; n++) terms.push(lit(c.cells[n]));
-      co.push(`grid[${k * W + j}] = ${polyExpr(terms, "s")};`);
+      co.push(`grid[${k * W + j}] = ${polyExpr(terms, "s", WHERE)};`);
       cs.push(`grid[${k * W + j}]`);
     }
-    ev.push(`const r${k} = ${polyExpr(cs, "tau")};`);
+    ev.push(`const r${k} = ${polyExpr(cs, "tau", WHERE)};`);
     rows.push(`r${k}`);
     if (k > 0) drows.push(`${k} * r${k}`);
   }
-  ev.push(`res[0] = ${polyExpr(rows, "z")};`);
-  ev.push(`res[1] = ${drows.length ? polyExpr(drows, "z") : "0"};`);
+  ev.push(`res[0] = ${polyExpr(rows, "z", WHERE)};`);
+  ev.push(`res[1] = ${drows.length ? polyExpr(drows, "z", WHERE) : "0"};`);
   return {
     evaluate: new Function("grid", "tau", "z", "res", ev.join("\n")) as Eval75,
     collapse: new Function("grid", "s", co.join("\n")) as Collapse75,

@@ -7,6 +7,7 @@
  * nothing on standard output, and never print "NaN" (other than echoing what was typed).
  */
 import { assert } from "../_assert.ts";
+import { STEEL_V_OPTIONS } from "../acoustics/_fixture.ts";
 
 const ROOT = new URL("../../", import.meta.url);
 
@@ -22,22 +23,7 @@ interface Case {
   readonly names: RegExp;
 }
 
-const SPACING_OK = [
-  "--od",
-  "114.3 mm",
-  "--wall",
-  "6.02 mm",
-  "--wall-speed",
-  "5920 m/s",
-  "--wall-shear-speed",
-  "3230 m/s",
-  "--fluid-speed",
-  "1482 m/s",
-  "--wedge-speed",
-  "2720 m/s",
-  "--wedge-angle",
-  "38 deg",
-];
+const SPACING_OK: readonly string[] = STEEL_V_OPTIONS;
 
 /** SPACING_OK with one option's value replaced (or added). */
 function raw(option: string, value: string, base: readonly string[] = SPACING_OK): string[] {
