@@ -176,7 +176,6 @@ Deno.test("one traverse count: a warning that delay and sound speed cannot be to
 Deno.test("another liquid only when nothing within the declared one explains the readings", async () => {
   // water declared, the pipe actually full of a liquid far slower than any plausible water state
   const site = await readSiteText(ZV);
-  const plan = planSite(site, { monteCarlo: false });
   const slow = await readSiteText(
     ZV.replace("fluid: { liquid: water,", "fluid: { soundSpeed: 1150 m/s, liquid: water,"),
   );
