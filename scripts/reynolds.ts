@@ -75,14 +75,19 @@ runMain(async () => {
     nu = parseQuantity(v.viscosity, "kinematicViscosity", "--viscosity");
   } else if (typeof v.temperature === "string") {
     const liquid = typeof v.liquid === "string" ? v.liquid : "water";
-    if (liquid !== "water") {
-      throw new InputError("--liquid", liquid, "water (for other liquids give --viscosity)");
-    }
     const T = parseQuantity(v.temperature, "temperature", "--temperature");
     const p = optionalQuantity(v, "pressure", "pressure", 101325);
-    const { water } = await import("../lib/water/mod.ts");
-    nu = water.kinematicViscosity(T, p);
-    nuSource = "iapws-r12-08";
+    if (liquid === "water") {
+      const { water } = await import("../lib/water/mod.ts");
+      nu = water.kinematicViscosity(T, p);
+      nuSource = "iapws-r12-08";
+    } else {
+      // every registry liquid, by the same names the site files take
+      const { liquidProperties } = await import("../lib/liquids/mod.ts");
+      const st = liquidProperties(liquid, T, p);
+      nu = st.kinematicViscosity;
+      nuSource = `registry liquid ${liquid}`;
+    }
   } else {
     throw new InputError(
       "--viscosity",
