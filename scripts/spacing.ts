@@ -252,18 +252,8 @@ async function liquidSpeed(liquid: string, Tl: number, p: number, d: Draft): Pro
     d.notes.push("liquid: water, IAPWS-95 (iapws-r6-95)");
     return;
   }
-  const spec = "../lib/liquids/mod.ts";
-  // deno-lint-ignore no-explicit-any
-  let mod: any;
-  try {
-    mod = await import(spec);
-  } catch {
-    throw new InputError(
-      "--liquid",
-      liquid,
-      "water (other liquids are not available)",
-    );
-  }
+  // a literal specifier: the module graph is known ahead, so no read permission on lib/ is needed
+  const mod = await import("../lib/liquids/mod.ts");
   const props = mod.liquidProperties(liquid, Tl, p);
   d.cf = props.soundSpeed;
   if (typeof props.soundSpeedSpread === "number") d.u.fluidSoundSpeed = props.soundSpeedSpread;

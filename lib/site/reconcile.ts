@@ -217,16 +217,17 @@ export function soundSpeedFromLiquidTime(
 /**
  * Reconcile readings taken on site with the plan.
  *
- * Method: re-plan the site with the measured temperature and wall thickness; per mounting, the
- * liquid time τ = measured total − fixed delay − wall and lining times (which depend only on
- * the Snell invariant, not on the liquid), then the liquid's sound speed from τ
- * ({@link soundSpeedFromLiquidTime}); compare with the registry's at that temperature within
- * two standard uncertainties (liquid data spread, wall tolerance, fixed delay). On a mismatch,
- * each candidate cause is sized: the temperature change that would explain it (from dc/dT), the
- * wall or lining change (the bore that reconciles τ with the registry's speed), registry liquids
- * whose speed matches, and entrained gas (a much lower speed). Flow is recomputed with the
- * measured liquid time in the Snell-invariant form v = c_w·Δt / (2·sin θ_w·τ), and the
- * re-planned bore. Bounds of the causes: {@link RECONCILE_BOUNDS} (common practice).
+ * Method: re-plan the site with the measured temperature and wall thickness. Per mounting, the
+ * liquid time τ = measured total − fixed delay − (planned total − planned liquid time), then
+ * the liquid's sound speed from τ ({@link soundSpeedFromLiquidTime}), compared with the
+ * registry's within two standard uncertainties. On a mismatch, every candidate cause within the
+ * declared liquid (temperature, fixed delay, wedge data, wall, lining, deposits, gas) is fitted
+ * to all readings at once with the clamp-on forward model and ranked by χ² plus plausibility
+ * (lib/site/reconcile_fit.ts); readings of two traverse counts separate delay errors (constant
+ * time) from sound-speed errors (time per crossing). Another registry liquid is offered only
+ * when no cause within the declared one fits. Flow is recomputed with the measured liquid time
+ * in the Snell-invariant form v = c_w·Δt / (2·sin θ_w·τ) and the re-planned bore. Bounds of the
+ * causes: {@link RECONCILE_BOUNDS} (common practice). See docs/readings.md.
  *
  * @param site the site as planned (SI)
  * @param readings the readings (SI)

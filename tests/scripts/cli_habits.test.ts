@@ -118,3 +118,25 @@ Deno.test("reynolds: a registry liquid other than water by its site-file name", 
   assert.equal(r.code, 0, r.stderr);
   assert.match(r.stdout, /registry liquid propylene-glycol-30/);
 });
+
+Deno.test("spacing: a registry liquid below 0 °C, as site files take it", async () => {
+  const r = await runScript("spacing.ts", [
+    "--od",
+    "88.9 mm",
+    "--wall",
+    "3 mm",
+    "--material",
+    "stainless-steel-316",
+    "--liquid",
+    "propylene-glycol-30",
+    "--temperature",
+    "-5 degC",
+    "--wedge-speed",
+    "2700 m/s",
+    "--wedge-angle",
+    "40 deg",
+    "--json",
+  ], { permissions: RO });
+  assert.equal(r.code, 0, r.stderr);
+  assert.ok(JSON.stringify(JSON.parse(r.stdout)).includes("propylene-glycol-30"));
+});
