@@ -12,6 +12,9 @@ import { NotFoundError } from "../../lib/errors.ts";
 
 const RO = ["--allow-read=data"];
 
+/** Arguments written as one string, separated by "|". */
+const args = (s: string) => s.split("|");
+
 Deno.test("negative values: joined to their option, never read as flags", async () => {
   const spec = { temperature: { type: "string" as const }, quiet: { type: "boolean" as const } };
   assert.deepEqual(joinNegativeValues(["--temperature", "-5 degC", "--quiet"], spec), [
@@ -20,12 +23,11 @@ Deno.test("negative values: joined to their option, never read as flags", async 
   ]);
   // a boolean option never swallows the next argument
   assert.deepEqual(joinNegativeValues(["--quiet", "-5"], spec), ["--quiet", "-5"]);
-  const r = await runScript("sound_speed.ts", [
-    "--liquid",
-    "ethylene-glycol-30",
-    "--temperature",
-    "-5 degC",
-  ], { permissions: RO });
+  const r = await runScript(
+    "sound_speed.ts",
+    args("--liquid|ethylene-glycol-30|--temperature|-5 degC"),
+    { permissions: RO },
+  );
   assert.equal(r.code, 0, r.stderr);
   assert.match(r.stdout, /-5\.00 °C/);
 });
@@ -44,20 +46,14 @@ Deno.test("unit case and gauge marks: GPM, bar(g), BARG, PSIA accepted; MM stays
 });
 
 Deno.test("bare psi: a note on standard error that it is read as absolute", async () => {
-  const r = await runScript("sound_speed.ts", [
-    "--temperature",
-    "20 degC",
-    "--pressure",
-    "60 psi",
-  ], { permissions: RO });
+  const r = await runScript("sound_speed.ts", args("--temperature|20 degC|--pressure|60 psi"), {
+    permissions: RO,
+  });
   assert.equal(r.code, 0, r.stderr);
   assert.match(r.stderr, /note: --pressure: .*absolute.*psig/);
-  const g = await runScript("sound_speed.ts", [
-    "--temperature",
-    "20 degC",
-    "--pressure",
-    "60 psig",
-  ], { permissions: RO });
+  const g = await runScript("sound_speed.ts", args("--temperature|20 degC|--pressure|60 psig"), {
+    permissions: RO,
+  });
   assert.equal(g.stderr, "");
 });
 
@@ -81,7 +77,7 @@ Deno.test("suggestions by family: glycol, steel, tee", () => {
 });
 
 Deno.test("glycol in the liquid error lists the glycol mixtures", async () => {
-  const r = await runScript("sound_speed.ts", ["--liquid", "glycol", "--temperature", "5 degC"], {
+  const r = await runScript("sound_speed.ts", args("--liquid|glycol|--temperature|5 degC"), {
     permissions: RO,
   });
   assert.equal(r.code, 2);
@@ -89,54 +85,35 @@ Deno.test("glycol in the liquid error lists the glycol mixtures", async () => {
 });
 
 Deno.test("pipe script: an unknown material is refused with suggestions, exit 2", async () => {
-  const r = await runScript("pipe.ts", [
-    "--standard",
-    "ASME B36.10M",
-    "--nps",
-    "4",
-    "--schedule",
-    "40",
-    "--material",
-    "steel",
-  ], { permissions: RO });
+  const r = await runScript(
+    "pipe.ts",
+    args("--standard|ASME B36.10M|--nps|4|--schedule|40|--material|steel"),
+    { permissions: RO },
+  );
   assert.equal(r.code, 2);
   assert.equal(r.stdout, "");
   assert.match(r.stderr, /material: got "steel".*carbon-steel/);
 });
 
 Deno.test("reynolds: a registry liquid other than water by its site-file name", async () => {
-  const r = await runScript("reynolds.ts", [
-    "--diameter",
-    "100 mm",
-    "--velocity",
-    "1 m/s",
-    "--liquid",
-    "propylene-glycol-30",
-    "--temperature",
-    "20 degC",
-  ], { permissions: RO });
+  const r = await runScript(
+    "reynolds.ts",
+    args("--diameter|100 mm|--velocity|1 m/s|--liquid|propylene-glycol-30|--temperature|20 degC"),
+    { permissions: RO },
+  );
   assert.equal(r.code, 0, r.stderr);
   assert.match(r.stdout, /registry liquid propylene-glycol-30/);
 });
 
 Deno.test("spacing: a registry liquid below 0 °C, as site files take it", async () => {
-  const r = await runScript("spacing.ts", [
-    "--od",
-    "88.9 mm",
-    "--wall",
-    "3 mm",
-    "--material",
-    "stainless-steel-316",
-    "--liquid",
-    "propylene-glycol-30",
-    "--temperature",
-    "-5 degC",
-    "--wedge-speed",
-    "2700 m/s",
-    "--wedge-angle",
-    "40 deg",
-    "--json",
-  ], { permissions: RO });
+  const r = await runScript(
+    "spacing.ts",
+    args(
+      "--od|88.9 mm|--wall|3 mm|--material|stainless-steel-316|--liquid|propylene-glycol-30|" +
+        "--temperature|-5 degC|--wedge-speed|2700 m/s|--wedge-angle|40 deg|--json",
+    ),
+    { permissions: RO },
+  );
   assert.equal(r.code, 0, r.stderr);
   assert.ok(JSON.stringify(JSON.parse(r.stdout)).includes("propylene-glycol-30"));
 });
