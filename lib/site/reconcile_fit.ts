@@ -131,6 +131,7 @@ export const FIT_ASSUMPTIONS = {
  * ```ts
  * import { predictTimes } from "./reconcile_fit.ts";
  * const setup = { outsideDiameter: 0.1683, wallThickness: 0.00711, wallSoundSpeed: 5900,
+ *   wallShearSpeed: 3230,
  *   lining: [], fluidSoundSpeed: 1482, wedgeSoundSpeed: 2720, wedgeAngle: 0.66,
  *   wedgeSpeedPerKelvin: 0, soundSpeedAt: () => 1482 };
  * const [z, v] = predictTimes({ setup, delay: 0 }, [
@@ -177,6 +178,7 @@ export function predictTimes(
  * ```ts
  * import { causeModels } from "./reconcile_fit.ts";
  * const setup = { outsideDiameter: 0.1683, wallThickness: 0.00711, wallSoundSpeed: 5900,
+ *   wallShearSpeed: 3230,
  *   lining: [], fluidSoundSpeed: 1482, wedgeSoundSpeed: 2720, wedgeAngle: 0.66,
  *   wedgeSpeedPerKelvin: 0, soundSpeedAt: () => 1482 };
  * const names = causeModels(setup, { temperature: 15, fixedDelay: 5e-6, wedgeRelative: 0.03,
@@ -313,6 +315,7 @@ export function causeModels(
  * ```ts
  * import { causeModels, fitCause, predictTimes } from "./reconcile_fit.ts";
  * const setup = { outsideDiameter: 0.1683, wallThickness: 0.00711, wallSoundSpeed: 5900,
+ *   wallShearSpeed: 3230,
  *   lining: [], fluidSoundSpeed: 1482, wedgeSoundSpeed: 2720, wedgeAngle: 0.66,
  *   wedgeSpeedPerKelvin: 0, soundSpeedAt: () => 1482 };
  * const rs = [1, 2].map((n) => ({ traverses: n, totalTime: 0, fixedDelay: 0 }));
