@@ -6,7 +6,7 @@
  */
 import { parseArgs, type ParseArgsConfig } from "node:util";
 import { InputError, SnellpathError } from "../lib/errors.ts";
-import { absolutePressureNote, type Dimension, parseQuantity } from "../lib/units.ts";
+import { absolutePressureNote, type Dimension, parseQuantity, SI_UNIT } from "../lib/units.ts";
 
 /** Option spec as `node:util` `parseArgs` takes it. */
 export type OptionSpec = NonNullable<ParseArgsConfig["options"]>;
@@ -197,4 +197,35 @@ export function optionalQuantity(
   const note = dimension === "pressure" ? absolutePressureNote(v) : undefined;
   if (note) console.error(`note: --${name}: ${note}`);
   return x;
+}
+
+/**
+ * One line echoing the quantity options as the user wrote them, each beside its SI value
+ * (`as given: --temperature 68 degF = 293.15 K, --pressure 30 psig = 308168 Pa`); empty when
+ * none was given.
+ *
+ * @param values parsed values
+ * @param specs option names without dashes and their dimensions
+ * @returns the line, or "" when no listed option was given
+ *
+ * @example
+ * ```ts
+ * import { givenLine } from "./_cli.ts";
+ * const l = givenLine({ temperature: "68 degF" }, [["temperature", "temperature"]]);
+ * if (l !== "as given: --temperature 68 degF = 293.15 K") throw new Error(l);
+ * ```
+ */
+export function givenLine(
+  values: Record<string, unknown>,
+  specs: readonly (readonly [string, Dimension])[],
+): string {
+  const parts: string[] = [];
+  for (const [name, dim] of specs) {
+    const v = values[name];
+    if (typeof v !== "string") continue;
+    const x = parseQuantity(v, dim, `--${name}`);
+    const unit = dim === "temperature" ? "K" : dim === "temperatureDifference" ? "K" : SI_UNIT[dim];
+    parts.push(`--${name} ${v.trim()} = ${Number(x.toPrecision(6))}${unit ? " " + unit : ""}`);
+  }
+  return parts.length ? `as given: ${parts.join(", ")}` : "";
 }

@@ -5,6 +5,7 @@
  * @module
  */
 import {
+  givenLine,
   optionalQuantity,
   parseCli,
   requirePositiveQuantity,
@@ -150,6 +151,15 @@ runMain(async () => {
   const g = (x: number, d = 4) => Number(x.toPrecision(d)).toString();
   console.log(`Reynolds number   ${g(re, 5)}  (${est.regime})`);
   console.log(`  velocity ${g(V)} m/s, diameter ${g(D)} m, ν ${g(nu)} m²/s (${nuSource})`);
+  const given = givenLine(v, [
+    ["diameter", "length"],
+    ["velocity", "speed"],
+    ["flow", "flowRate"],
+    ["temperature", "temperature"],
+    ["pressure", "pressure"],
+    ["viscosity", "kinematicViscosity"],
+  ]);
+  if (given) console.log(`  ${given}`);
   console.log(
     `friction factor   ${g(f, 5)}  Darcy, ${out.frictionMethod}, ε/D ${g(rr, 3)} (${epsSource})`,
   );

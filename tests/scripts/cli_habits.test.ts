@@ -117,3 +117,17 @@ Deno.test("spacing: a registry liquid below 0 °C, as site files take it", async
   assert.equal(r.code, 0, r.stderr);
   assert.ok(JSON.stringify(JSON.parse(r.stdout)).includes("propylene-glycol-30"));
 });
+
+Deno.test("results echo the quantities as the user wrote them, beside SI", async () => {
+  const r = await runScript(
+    "sound_speed.ts",
+    args("--temperature|68 degF|--pressure|30 psig"),
+    { permissions: RO },
+  );
+  assert.equal(r.code, 0, r.stderr);
+  // 68 °F = 20 °C = 293.15 K; 30 psig = 30 × 6894.757293168 + 101325 Pa = 308167.7 Pa
+  assert.match(
+    r.stdout,
+    /as given: --temperature 68 degF = 293\.15 K, --pressure 30 psig = 308168 Pa/,
+  );
+});
