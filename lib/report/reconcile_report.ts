@@ -21,7 +21,7 @@ export const RECONCILE_FORMATS = ["text", "md", "html", "json"] as const;
 export type ReconcileFormat = typeof RECONCILE_FORMATS[number];
 
 /** The caution every reconciliation report carries. */
-export const RECONCILE_SAFETY =
+export const RECONCILE_SAFETY: string =
   "Caution: readings are taken on live lines. Hot, pressurised or hazardous-area pipework, " +
   "confined spaces, work at height and the removal of insulation or lagging need the site's " +
   "permits and a competent person; local codes and licensed practice take precedence over " +

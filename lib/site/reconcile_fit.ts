@@ -63,7 +63,7 @@ export type CauseName =
   | "other-liquid";
 
 /** A perturbation of the setup: the changed setup and an extra delay, s. */
-interface Perturbed {
+export interface Perturbed {
   readonly setup: ForwardSetup;
   readonly delay: number;
 }
