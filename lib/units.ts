@@ -209,6 +209,33 @@ function lookupUnit(token: string): UnitDef | undefined {
   return undefined;
 }
 
+let folded: Map<string, UnitDef | null> | undefined;
+
+/**
+ * A single unit written in another case (`GPM`, `PSI`, `KPA`): accepted only when exactly one
+ * table unit (with its prefix) has that spelling case-folded, so `MM` (megametre or millimetre)
+ * stays refused.
+ */
+function foldedUnit(unit: string): { f: number; d: Dim } | undefined {
+  if (!/^[A-Za-z]+$/.test(unit)) return undefined;
+  if (!folded) {
+    folded = new Map();
+    const add = (name: string, u: UnitDef) => {
+      const k = name.toLowerCase();
+      const had = folded!.get(k);
+      folded!.set(k, had === undefined || (had && had.f === u.f && sameDim(had.d, u.d)) ? u : null);
+    };
+    for (const [name, u] of Object.entries(UNITS)) {
+      add(name, u);
+      if (u.prefix) {
+        for (const [p, pf] of Object.entries(PREFIXES)) add(p + name, { f: pf * u.f, d: u.d });
+      }
+    }
+  }
+  const u = folded.get(unit.toLowerCase());
+  return u ? { f: u.f, d: u.d } : undefined;
+}
+
 /** Parse a unit expression (`m^3/h`, `kg/m^3`, `mPa s`, `1/m`) into factor and dimension. */
 function parseUnitExpr(expr: string): { f: number; d: Dim } | undefined {
   const normal = expr
@@ -271,9 +298,13 @@ function fastParse(text: string, dimension: Dimension): FastResult {
     if (t !== undefined) return finite(x * t);
     return { ok: false, wrongDimension: parseUnitExpr(unit) !== undefined };
   }
-  if (dimension === "pressure" && PRESSURES[unit]) return finite(PRESSURES[unit](x));
+  if (dimension === "pressure") {
+    // gauge and absolute marks in any case: barg, bar(g), BARG, psia, PSI(A)
+    const key = unit.toLowerCase().replace(/\s*\(([ga])\)$/, "$1");
+    if (PRESSURES[key]) return finite(PRESSURES[key](x));
+  }
   if (unit === "" && dimension !== "ratio") return { ok: false, wrongDimension: true };
-  const u = parseUnitExpr(unit);
+  const u = parseUnitExpr(unit) ?? foldedUnit(unit);
   if (!u) {
     return { ok: false, wrongDimension: TEMPERATURES[unit] !== undefined || unit in PRESSURES };
   }
@@ -530,4 +561,25 @@ export function fastTable(): {
     temperatureDifferences: Object.keys(TEMPERATURE_DIFFERENCES),
     pressures: Object.keys(PRESSURES),
   };
+}
+
+/**
+ * A note for a pressure written in bare `psi`: the toolkit reads it as absolute, where
+ * a gauge on site usually shows gauge pressure. Common practice: say so rather than guess.
+ *
+ * @param text the pressure as written
+ * @returns the note, or undefined when the text names gauge or absolute explicitly (or is SI)
+ *
+ * @example
+ * ```ts
+ * import { absolutePressureNote } from "./units.ts";
+ * if (!absolutePressureNote("72 PSI")?.includes("psig")) throw new Error();
+ * if (absolutePressureNote("72 psig") !== undefined) throw new Error();
+ * ```
+ */
+export function absolutePressureNote(text: string): string | undefined {
+  const m = /^\s*[+-]?[\d.eE+-]+\s*(psi)\s*$/i.exec(text);
+  if (!m) return undefined;
+  const u = m[1].toLowerCase();
+  return `"${text.trim()}" read as absolute pressure (${u}a); write ${u}g for a gauge reading`;
 }

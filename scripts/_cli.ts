@@ -6,7 +6,7 @@
  */
 import { parseArgs, type ParseArgsConfig } from "node:util";
 import { InputError, SnellpathError } from "../lib/errors.ts";
-import { type Dimension, parseQuantity } from "../lib/units.ts";
+import { absolutePressureNote, type Dimension, parseQuantity, SI_UNIT } from "../lib/units.ts";
 
 /** Option spec as `node:util` `parseArgs` takes it. */
 export type OptionSpec = NonNullable<ParseArgsConfig["options"]>;
@@ -33,10 +33,11 @@ export function parseCli(
   help: string,
 ): { values: Record<string, string | boolean | string[] | undefined>; positionals: string[] } {
   let parsed;
+  const all = { ...COMMON_OPTIONS, ...options };
   try {
     parsed = parseArgs({
-      args: args[0] === "--" ? args.slice(1) : args,
-      options: { ...COMMON_OPTIONS, ...options },
+      args: joinNegativeValues(args[0] === "--" ? args.slice(1) : args, all),
+      options: all,
       allowPositionals: true,
       strict: true,
     });
@@ -52,6 +53,39 @@ export function parseCli(
     values: Record<string, string | boolean | string[] | undefined>;
     positionals: string[];
   };
+}
+
+/**
+ * Join a string option and a following negative number into one `--name=value` argument, so
+ * that `--temperature "-5 degC"` is read as a value and not as a flag (node:util parseArgs
+ * refuses a value that starts with a dash).
+ *
+ * @param args the arguments
+ * @param options the option spec
+ * @returns the arguments with such pairs joined
+ *
+ * @example
+ * ```ts
+ * import { joinNegativeValues } from "./_cli.ts";
+ * const a = joinNegativeValues(["--temperature", "-5 degC", "-h"], {
+ *   temperature: { type: "string" }, help: { type: "boolean", short: "h" } });
+ * if (a.length !== 2 || a[0] !== "--temperature=-5 degC") throw new Error(a.join("|"));
+ * ```
+ */
+export function joinNegativeValues(args: readonly string[], options: OptionSpec): string[] {
+  const out: string[] = [];
+  for (let i = 0; i < args.length; i++) {
+    const m = /^--([A-Za-z][\w-]*)$/.exec(args[i]);
+    const next = args[i + 1];
+    if (
+      m && options[m[1]]?.type === "string" && next !== undefined &&
+      /^-\s*(\d|\.\d|inf|nan)/i.test(next)
+    ) {
+      out.push(`${args[i]}=${next}`);
+      i++;
+    } else out.push(args[i]);
+  }
+  return out;
 }
 
 /**
@@ -158,5 +192,40 @@ export function optionalQuantity(
   fallback: number,
 ): number {
   const v = values[name];
-  return typeof v === "string" ? parseQuantity(v, dimension, `--${name}`) : fallback;
+  if (typeof v !== "string") return fallback;
+  const x = parseQuantity(v, dimension, `--${name}`);
+  const note = dimension === "pressure" ? absolutePressureNote(v) : undefined;
+  if (note) console.error(`note: --${name}: ${note}`);
+  return x;
+}
+
+/**
+ * One line echoing the quantity options as the user wrote them, each beside its SI value
+ * (`as given: --temperature 68 degF = 293.15 K, --pressure 30 psig = 308168 Pa`); empty when
+ * none was given.
+ *
+ * @param values parsed values
+ * @param specs option names without dashes and their dimensions
+ * @returns the line, or "" when no listed option was given
+ *
+ * @example
+ * ```ts
+ * import { givenLine } from "./_cli.ts";
+ * const l = givenLine({ temperature: "68 degF" }, [["temperature", "temperature"]]);
+ * if (l !== "as given: --temperature 68 degF = 293.15 K") throw new Error(l);
+ * ```
+ */
+export function givenLine(
+  values: Record<string, unknown>,
+  specs: readonly (readonly [string, Dimension])[],
+): string {
+  const parts: string[] = [];
+  for (const [name, dim] of specs) {
+    const v = values[name];
+    if (typeof v !== "string") continue;
+    const x = parseQuantity(v, dim, `--${name}`);
+    const unit = dim === "temperature" ? "K" : dim === "temperatureDifference" ? "K" : SI_UNIT[dim];
+    parts.push(`--${name} ${v.trim()} = ${Number(x.toPrecision(6))}${unit ? " " + unit : ""}`);
+  }
+  return parts.length ? `as given: ${parts.join(", ")}` : "";
 }

@@ -5,6 +5,7 @@
  * @module
  */
 import {
+  givenLine,
   optionalQuantity,
   parseCli,
   requirePositiveQuantity,
@@ -75,14 +76,19 @@ runMain(async () => {
     nu = parseQuantity(v.viscosity, "kinematicViscosity", "--viscosity");
   } else if (typeof v.temperature === "string") {
     const liquid = typeof v.liquid === "string" ? v.liquid : "water";
-    if (liquid !== "water") {
-      throw new InputError("--liquid", liquid, "water (for other liquids give --viscosity)");
-    }
     const T = parseQuantity(v.temperature, "temperature", "--temperature");
     const p = optionalQuantity(v, "pressure", "pressure", 101325);
-    const { water } = await import("../lib/water/mod.ts");
-    nu = water.kinematicViscosity(T, p);
-    nuSource = "iapws-r12-08";
+    if (liquid === "water") {
+      const { water } = await import("../lib/water/mod.ts");
+      nu = water.kinematicViscosity(T, p);
+      nuSource = "iapws-r12-08";
+    } else {
+      // every registry liquid, by the same names the site files take
+      const { liquidProperties } = await import("../lib/liquids/mod.ts");
+      const st = liquidProperties(liquid, T, p);
+      nu = st.kinematicViscosity;
+      nuSource = `registry liquid ${liquid}`;
+    }
   } else {
     throw new InputError(
       "--viscosity",
@@ -145,6 +151,15 @@ runMain(async () => {
   const g = (x: number, d = 4) => Number(x.toPrecision(d)).toString();
   console.log(`Reynolds number   ${g(re, 5)}  (${est.regime})`);
   console.log(`  velocity ${g(V)} m/s, diameter ${g(D)} m, ν ${g(nu)} m²/s (${nuSource})`);
+  const given = givenLine(v, [
+    ["diameter", "length"],
+    ["velocity", "speed"],
+    ["flow", "flowRate"],
+    ["temperature", "temperature"],
+    ["pressure", "pressure"],
+    ["viscosity", "kinematicViscosity"],
+  ]);
+  if (given) console.log(`  ${given}`);
   console.log(
     `friction factor   ${g(f, 5)}  Darcy, ${out.frictionMethod}, ε/D ${g(rr, 3)} (${epsSource})`,
   );

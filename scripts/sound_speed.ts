@@ -7,7 +7,7 @@
 import { InputError } from "../lib/errors.ts";
 import { parseQuantity } from "../lib/units.ts";
 import { liquidProperties, liquids, type LiquidState } from "../lib/liquids/mod.ts";
-import { parseCli, requireOption, runMain } from "./_cli.ts";
+import { givenLine, optionalQuantity, parseCli, requireOption, runMain } from "./_cli.ts";
 
 const HELP = `
 sound_speed — sound speed, density and viscosity of a liquid at operating conditions
@@ -88,9 +88,7 @@ runMain(() => {
     "temperature",
     "--temperature",
   );
-  const p = typeof values.pressure === "string"
-    ? parseQuantity(values.pressure, "pressure", "--pressure")
-    : 101325;
+  const p = optionalQuantity(values, "pressure", "pressure", 101325);
   let salinity: number | undefined;
   if (typeof values.salinity === "string") {
     salinity = Number(values.salinity);
@@ -170,6 +168,10 @@ runMain(() => {
   const s = liquidProperties(id, T, p, { ...base, formulation });
   if (values.json) {
     console.log(JSON.stringify({ temperature: T, pressure: p, salinity, ...s }, null, 2));
-  } else console.log(fmtState(s, T, p));
+  } else {
+    console.log(fmtState(s, T, p));
+    const given = givenLine(values, [["temperature", "temperature"], ["pressure", "pressure"]]);
+    if (given) console.log(`  ${given}`);
+  }
   return 0;
 });

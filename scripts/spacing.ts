@@ -108,118 +108,24 @@ function need(x: number | undefined, name: string, what: string): number {
 export async function resolveGeometry(
   values: Record<string, unknown>,
 ): Promise<ResolvedGeometry> {
-  let od = q(values, "od", "length");
-  let wall = q(values, "wall", "length");
-  let cL = q(values, "wall-speed", "speed");
-  let cS = q(values, "wall-shear-speed", "speed");
-  let cf = q(values, "fluid-speed", "speed");
-  let cw = q(values, "wedge-speed", "speed");
+  const d: Draft = {
+    od: q(values, "od", "length"),
+    wall: q(values, "wall", "length"),
+    cL: q(values, "wall-speed", "speed"),
+    cS: q(values, "wall-shear-speed", "speed"),
+    cf: q(values, "fluid-speed", "speed"),
+    cw: q(values, "wedge-speed", "speed"),
+    notes: [],
+    u: {},
+    lining: undefined,
+  };
   const angle = q(values, "wedge-angle", "angle");
   const lt = list(values, "lining-thickness", "length");
   const ls = list(values, "lining-speed", "speed");
-  const notes: string[] = [];
-  const u: Record<string, unknown> = {};
-  let lining: LiningLayer[] | undefined;
-
   const catalogue = ["standard", "nps", "schedule", "material", "liquid", "wedge-material"]
     .some((k) => values[k] !== undefined);
-  if (catalogue) {
-    const T = q(values, "temperature", "temperature");
-    const p = q(values, "pressure", "pressure") ?? 101325;
-    const { registry } = await import("../lib/registry/mod.ts");
-    let material = typeof values.material === "string" ? values.material : undefined;
-    if (
-      values.standard !== undefined || values.nps !== undefined || values.schedule !== undefined
-    ) {
-      const { pipe } = await import("../lib/pipe/mod.ts");
-      const pp = pipe({
-        standard: String(values.standard ?? ""),
-        nps: String(values.nps ?? ""),
-        schedule: String(values.schedule ?? ""),
-      });
-      od ??= pp.outsideDiameter;
-      wall ??= pp.wallThickness;
-      material ??= pp.material;
-      notes.push(`pipe: ${pp.standard} NPS ${pp.nps} schedule ${pp.schedule} (catalogue)`);
-      const tw = pp.tolerances?.wallThickness;
-      if (tw && (tw.plus !== undefined || tw.minus !== undefined)) {
-        u.wallThickness = Math.max(tw.plus ?? 0, tw.minus ?? 0);
-      }
-      if (lt === undefined && pp.lining.length > 0) {
-        lining = pp.lining.map((l) => {
-          const m = registry.material(l.material);
-          return {
-            thickness: l.thickness,
-            soundSpeed: T === undefined
-              ? m.longitudinal
-              : registry.materialSpeedAt(l.material, T, "longitudinal"),
-          };
-        });
-        notes.push(`lining: ${pp.lining.map((l) => l.material).join(", ")} (catalogue)`);
-      }
-    }
-    if (material !== undefined) {
-      const m = registry.material(material);
-      cL ??= T === undefined
-        ? m.longitudinal
-        : registry.materialSpeedAt(material, T, "longitudinal");
-      if (m.shear !== undefined) {
-        cS ??= T === undefined ? m.shear : registry.materialSpeedAt(material, T, "shear");
-        if (m.shearSpread !== undefined) u.wallShearSpeed = m.shearSpread;
-      }
-      if (m.longitudinalSpread !== undefined) u.wallSoundSpeed = m.longitudinalSpread;
-      notes.push(`wall material: ${m.id} (${m.source}, ${m.basis})`);
-    }
-    if (typeof values["wedge-material"] === "string") {
-      const id = values["wedge-material"];
-      const m = registry.material(id);
-      cw ??= T === undefined ? m.longitudinal : registry.materialSpeedAt(id, T, "longitudinal");
-      if (m.longitudinalSpread !== undefined) u.wedgeSoundSpeed = m.longitudinalSpread;
-      notes.push(`wedge material: ${m.id} (${m.source}, ${m.basis})`);
-    }
-    if (typeof values.liquid === "string" && cf === undefined) {
-      const Tl = need(T, "temperature", "the operating temperature for the liquid");
-      if (values.liquid === "water") {
-        const { water } = await import("../lib/water/mod.ts");
-        cf = water.soundSpeed(Tl, p);
-        notes.push("liquid: water, IAPWS-95 (iapws-r6-95)");
-      } else {
-        const spec = "../lib/liquids/mod.ts";
-        // deno-lint-ignore no-explicit-any
-        let mod: any;
-        try {
-          mod = await import(spec);
-        } catch {
-          throw new InputError(
-            "--liquid",
-            values.liquid,
-            "water (other liquids are not available)",
-          );
-        }
-        const props = mod.liquidProperties(values.liquid, Tl, p);
-        cf = props.soundSpeed;
-        if (typeof props.soundSpeedSpread === "number") u.fluidSoundSpeed = props.soundSpeedSpread;
-        notes.push(`liquid: ${values.liquid} (liquids registry)`);
-      }
-    }
-  }
-  if (lt !== undefined || ls !== undefined) {
-    if (lt === undefined) {
-      throw new InputError("--lining-thickness", "nothing", "the lining thickness");
-    }
-    if (ls === undefined) {
-      throw new InputError("--lining-speed", "nothing", "the lining sound speed");
-    }
-    const speeds = ls;
-    if (lt.length !== speeds.length) {
-      throw new InputError(
-        "--lining-speed",
-        `${speeds.length} values`,
-        `${lt.length}, one per layer`,
-      );
-    }
-    lining = lt.map((x, i) => ({ thickness: x, soundSpeed: speeds[i] }));
-  }
+  if (catalogue) await fromRegistry(values, d, lt === undefined);
+  if (lt !== undefined || ls !== undefined) d.lining = statedLining(lt, ls);
   const mode = values["wall-mode"];
   if (mode !== undefined && mode !== "auto" && mode !== "longitudinal" && mode !== "shear") {
     throw new InputError("--wall-mode", String(mode), "auto, longitudinal or shear");
@@ -228,22 +134,148 @@ export async function resolveGeometry(
   const io = q(values, "index-offset", "length");
   return {
     inputs: {
-      outsideDiameter: need(od, "od", "the outside diameter"),
-      wallThickness: need(wall, "wall", "the wall thickness"),
-      wallSoundSpeed: need(cL, "wall-speed", "the wall's longitudinal speed"),
-      wallShearSpeed: cS,
+      outsideDiameter: need(d.od, "od", "the outside diameter"),
+      wallThickness: need(d.wall, "wall", "the wall thickness"),
+      wallSoundSpeed: need(d.cL, "wall-speed", "the wall's longitudinal speed"),
+      wallShearSpeed: d.cS,
       wallMode: mode as ClampOnInputs["wallMode"],
-      lining,
-      fluidSoundSpeed: need(cf, "fluid-speed", "the liquid's sound speed"),
-      wedgeSoundSpeed: need(cw, "wedge-speed", "the wedge's sound speed"),
+      lining: d.lining,
+      fluidSoundSpeed: need(d.cf, "fluid-speed", "the liquid's sound speed"),
+      wedgeSoundSpeed: need(d.cw, "wedge-speed", "the wedge's sound speed"),
       wedgeAngle: need(angle, "wedge-angle", "the wedge angle"),
       wedge: eh === undefined && io === undefined
         ? undefined
         : { elementHeight: eh, indexOffset: io },
     },
-    catalogueUncertainties: u as WindowUncertainties,
-    notes,
+    catalogueUncertainties: d.u as WindowUncertainties,
+    notes: d.notes,
   };
+}
+
+/** The geometry being gathered: stated values first, the registry fills the gaps. */
+interface Draft {
+  od?: number;
+  wall?: number;
+  cL?: number;
+  cS?: number;
+  cf?: number;
+  cw?: number;
+  notes: string[];
+  u: Record<string, unknown>;
+  lining?: LiningLayer[];
+}
+
+/** Fill the gaps from the registry: catalogue pipe, wall and wedge materials, the liquid. */
+async function fromRegistry(
+  values: Record<string, unknown>,
+  d: Draft,
+  catalogueLining: boolean,
+): Promise<void> {
+  const T = q(values, "temperature", "temperature");
+  const p = q(values, "pressure", "pressure") ?? 101325;
+  const { registry } = await import("../lib/registry/mod.ts");
+  let material = typeof values.material === "string" ? values.material : undefined;
+  if (values.standard !== undefined || values.nps !== undefined || values.schedule !== undefined) {
+    material = await cataloguePipe(values, d, T, catalogueLining) ?? material;
+  }
+  if (material !== undefined) {
+    const m = registry.material(material);
+    d.cL ??= T === undefined
+      ? m.longitudinal
+      : registry.materialSpeedAt(material, T, "longitudinal");
+    if (m.shear !== undefined) {
+      d.cS ??= T === undefined ? m.shear : registry.materialSpeedAt(material, T, "shear");
+      if (m.shearSpread !== undefined) d.u.wallShearSpeed = m.shearSpread;
+    }
+    if (m.longitudinalSpread !== undefined) d.u.wallSoundSpeed = m.longitudinalSpread;
+    d.notes.push(`wall material: ${m.id} (${m.source}, ${m.basis})`);
+  }
+  if (typeof values["wedge-material"] === "string") {
+    const id = values["wedge-material"];
+    const m = registry.material(id);
+    d.cw ??= T === undefined ? m.longitudinal : registry.materialSpeedAt(id, T, "longitudinal");
+    if (m.longitudinalSpread !== undefined) d.u.wedgeSoundSpeed = m.longitudinalSpread;
+    d.notes.push(`wedge material: ${m.id} (${m.source}, ${m.basis})`);
+  }
+  if (typeof values.liquid === "string" && d.cf === undefined) {
+    await liquidSpeed(
+      values.liquid,
+      need(T, "temperature", "the operating temperature for the liquid"),
+      p,
+      d,
+    );
+  }
+}
+
+/** The catalogue pipe: fills OD, wall, wall tolerance and lining; returns its material. */
+async function cataloguePipe(
+  values: Record<string, unknown>,
+  d: Draft,
+  T: number | undefined,
+  catalogueLining: boolean,
+): Promise<string | undefined> {
+  const { registry } = await import("../lib/registry/mod.ts");
+  const { pipe } = await import("../lib/pipe/mod.ts");
+  const pp = pipe({
+    standard: String(values.standard ?? ""),
+    nps: String(values.nps ?? ""),
+    schedule: String(values.schedule ?? ""),
+  });
+  d.od ??= pp.outsideDiameter;
+  d.wall ??= pp.wallThickness;
+  const material = typeof values.material === "string" ? values.material : pp.material;
+  d.notes.push(`pipe: ${pp.standard} NPS ${pp.nps} schedule ${pp.schedule} (catalogue)`);
+  const tw = pp.tolerances?.wallThickness;
+  if (tw && (tw.plus !== undefined || tw.minus !== undefined)) {
+    d.u.wallThickness = Math.max(tw.plus ?? 0, tw.minus ?? 0);
+  }
+  if (catalogueLining && pp.lining.length > 0) {
+    d.lining = pp.lining.map((l) => {
+      const m = registry.material(l.material);
+      return {
+        thickness: l.thickness,
+        soundSpeed: T === undefined
+          ? m.longitudinal
+          : registry.materialSpeedAt(l.material, T, "longitudinal"),
+      };
+    });
+    d.notes.push(`lining: ${pp.lining.map((l) => l.material).join(", ")} (catalogue)`);
+  }
+  return material;
+}
+
+/** The liquid's sound speed at T (K) and p (Pa): water by IAPWS-95, others from the registry. */
+async function liquidSpeed(liquid: string, Tl: number, p: number, d: Draft): Promise<void> {
+  if (liquid === "water") {
+    const { water } = await import("../lib/water/mod.ts");
+    d.cf = water.soundSpeed(Tl, p);
+    d.notes.push("liquid: water, IAPWS-95 (iapws-r6-95)");
+    return;
+  }
+  // a literal specifier: the module graph is known ahead, so no read permission on lib/ is needed
+  const mod = await import("../lib/liquids/mod.ts");
+  const props = mod.liquidProperties(liquid, Tl, p);
+  d.cf = props.soundSpeed;
+  if (typeof props.soundSpeedSpread === "number") d.u.fluidSoundSpeed = props.soundSpeedSpread;
+  d.notes.push(`liquid: ${liquid} (liquids registry)`);
+}
+
+/** Lining layers stated on the command line: one speed per thickness. */
+function statedLining(lt: number[] | undefined, ls: number[] | undefined): LiningLayer[] {
+  if (lt === undefined) {
+    throw new InputError("--lining-thickness", "nothing", "the lining thickness");
+  }
+  if (ls === undefined) {
+    throw new InputError("--lining-speed", "nothing", "the lining sound speed");
+  }
+  if (lt.length !== ls.length) {
+    throw new InputError(
+      "--lining-speed",
+      `${ls.length} values`,
+      `${lt.length}, one per layer`,
+    );
+  }
+  return lt.map((x, i) => ({ thickness: x, soundSpeed: ls[i] }));
 }
 
 /**

@@ -200,6 +200,11 @@ function manufacturing(
   });
 }
 
+/** Refuse a material the registry does not hold (the error suggests the nearest names). */
+function knownMaterial(reg: Registry, id: string): void {
+  reg.material(id);
+}
+
 function findTolerance(reg: Registry, key: string): PipeToleranceSet | undefined {
   try {
     return reg.pipeTolerance(key);
@@ -296,6 +301,7 @@ function fromCatalogue(spec: PipeCatalogueSpec, reg: Registry): ResolvedPipe {
     liningSource = { source: "input", basis: "input" };
   }
   const material = spec.material ?? rec.material;
+  if (spec.material !== undefined) knownMaterial(reg, spec.material);
   const set = findTolerance(reg, rec.standardId) ?? findTolerance(reg, material);
   const tolerances = set ? manufacturing(set, rec.outsideDiameter, rec.wallThickness) : undefined;
   return finish(
@@ -341,6 +347,7 @@ function fromMeasurements(
     );
   }
   const entries: TraceEntry[] = [];
+  knownMaterial(reg, spec.material);
   let od: number;
   if (hasC) {
     const c = positive("circumference", spec.circumference);

@@ -33,24 +33,37 @@ export function editDistance(a: string, b: string): number {
 }
 
 /**
- * The candidates nearest to `wanted` by edit distance (case-insensitive), best first.
+ * The candidates nearest to `wanted`, best first (case-insensitive): those that start with it,
+ * then those that contain it or share a hyphen-separated word with it (its family: `steel` →
+ * `carbon-steel`, `stainless-steel-316`; `tee` → `tee-branch`, `tee-through`), then the rest by
+ * Levenshtein edit distance.
  *
  * @param wanted what was asked for
  * @param candidates what exists
- * @param count how many to return (default 5)
- * @returns up to `count` candidates
+ * @param count how many to return (default 5; more when more share the word, up to 8)
+ * @returns up to `count` candidates (or up to 8 members of the family)
  *
  * @example
  * ```ts
  * import { nearest } from "./nearest.ts";
  * if (nearest("carbon-stel", ["pvc", "carbon-steel"])[0] !== "carbon-steel") throw new Error();
+ * const t = nearest("tee", ["elbow-90", "tee-branch", "reducer", "tee-through"]);
+ * if (t[0] !== "tee-branch" || t[1] !== "tee-through") throw new Error(t.join());
  * ```
  */
 export function nearest(wanted: string, candidates: readonly string[], count = 5): string[] {
-  const w = wanted.toLowerCase();
-  return [...new Set(candidates)]
-    .map((c) => ({ c, d: editDistance(w, c.toLowerCase()) }))
-    .sort((x, y) => x.d - y.d || x.c.localeCompare(y.c))
-    .slice(0, count)
-    .map((x) => x.c);
+  const w = wanted.toLowerCase().trim();
+  const words = new Set(w.split(/[-_\s]+/).filter((x) => x.length >= 3));
+  const tier = (c: string) => {
+    const l = c.toLowerCase();
+    if (w.length >= 2 && l.startsWith(w)) return 0;
+    if (w.length >= 3 && l.includes(w)) return 1;
+    if (l.split(/[-_\s]+/).some((x) => words.has(x))) return 2;
+    return 3;
+  };
+  const ranked = [...new Set(candidates)]
+    .map((c) => ({ c, t: tier(c), d: editDistance(w, c.toLowerCase()) }))
+    .sort((x, y) => x.t - y.t || x.d - y.d || x.c.localeCompare(y.c));
+  const family = ranked.filter((x) => x.t < 3).length;
+  return ranked.slice(0, Math.max(count, Math.min(family, 8))).map((x) => x.c);
 }

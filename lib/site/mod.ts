@@ -37,4 +37,5 @@ export {
   type Reconciliation,
   soundSpeedFromLiquidTime,
 } from "./reconcile.ts";
+export type { CauseName } from "./reconcile_fit.ts";
 export { deltaTForFlow, flowModel, MODEL_INPUTS } from "./model.ts";

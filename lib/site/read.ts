@@ -15,8 +15,8 @@
  */
 import { SnellpathError } from "../errors.ts";
 import { buildSite } from "./read_build.ts";
-import { checkHeader, nestRow, splitCsv } from "./read_csv.ts";
-import { type Ctx, fail } from "./read_fields.ts";
+import { checkHeader, csvHint, nestRow, splitCsv } from "./read_csv.ts";
+import { type Ctx, fail, oneLine } from "./read_fields.ts";
 import { checkText, decodeText, parseJsonText, parseYamlText } from "./read_text.ts";
 import { MAX_SITE_BYTES, MAX_SITES_CSV_BYTES, type SiteInput } from "./schema.ts";
 
@@ -265,10 +265,11 @@ export async function* streamSitesCsv(
       }
       ids.set(id, rec.line);
       const raw = nestRow(paths, rec.cells);
-      site = await buildSite(raw, { file: label, format: "csv", row: rec.line }, rowCtx);
+      const siteCtx: Ctx = { file: `${label} row ${rec.line} (site ${oneLine(id, 40)})` };
+      site = await buildSite(raw, { file: label, format: "csv", row: rec.line }, siteCtx);
     } catch (e) {
       if (!(e instanceof SnellpathError)) throw e;
-      yield { error: { row: rec.line, message: e.message } };
+      yield { error: { row: rec.line, message: csvHint(e.message) } };
       continue;
     }
     yield { site };

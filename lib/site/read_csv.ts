@@ -183,3 +183,32 @@ export function nestRow(
   });
   return root;
 }
+
+/**
+ * A row error in the words of a CSV: the hint `{ fitting: elbow-90 }` a site file would take
+ * becomes the column that holds it (`a cell in column run.downstream.fitting, for example
+ * elbow-90`).
+ *
+ * @param message the error message, `WHERE: FIELD: got …; expected …`
+ * @returns the message with site-file hints turned into column hints
+ *
+ * @example
+ * ```ts
+ * import { csvHint } from "./read_csv.ts";
+ * const m = csvHint("f.csv row 2 (site s1): run.downstream: got nothing; expected the " +
+ *   "downstream fitting, such as { fitting: elbow-90 }");
+ * if (!m.endsWith("a cell in column run.downstream.fitting, for example elbow-90")) {
+ *   throw new Error(m);
+ * }
+ * ```
+ */
+export function csvHint(message: string): string {
+  const m = /^(.*?): ([\w.[\]]+): got (.*)$/.exec(message);
+  if (!m) return message;
+  const field = m[2];
+  const rest = m[3].replace(
+    /such as \{ (\w+): ([^}]+?) \}/g,
+    (_all, k: string, v: string) => `a cell in column ${field}.${k}, for example ${v.trim()}`,
+  );
+  return `${m[1]}: ${field}: got ${rest}`;
+}

@@ -12,6 +12,17 @@ import { liquidProperties, liquids } from "../liquids/mod.ts";
 import { profileFactor } from "../flow/mod.ts";
 import { planSite, type SitePlan } from "./plan.ts";
 import type { SiteInput } from "./schema.ts";
+import {
+  causeModels,
+  type CauseName,
+  FIT_ASSUMPTIONS,
+  fitCause,
+  type FittedCause,
+  type ForwardSetup,
+  predictTimes,
+  type TimeReading,
+  traverseLine,
+} from "./reconcile_fit.ts";
 
 /** One mounting's readings. SI. */
 export interface MountingReading {
@@ -37,15 +48,21 @@ export interface FieldReadings {
   readonly mountings: readonly MountingReading[];
 }
 
-/** A candidate cause of a sound-speed mismatch. */
+/** A candidate cause of the mismatch, fitted to every reading at once. */
 export interface MismatchCause {
-  /** `temperature`, `wall-or-lining`, `other-liquid`, `gas`. */
-  readonly cause: "temperature" | "wall-or-lining" | "other-liquid" | "gas";
-  /** What would explain the mismatch, in words with figures. */
+  /** Cause name: temperature, fixed-delay, wedge, wall, lining, deposits, gas, other-liquid. */
+  readonly cause: CauseName;
+  /** What would explain the readings, in words with figures. */
   readonly explanation: string;
-  /** Whether the change needed is within plausible bounds. */
+  /** The fitted change, SI (see unit): K, s, m/s, m, or a fraction for gas. */
+  readonly value: number;
+  /** SI unit of value. */
+  readonly unit: string;
+  /** Root-mean-square time residual after the fit, s. */
+  readonly rmsResidual: number;
+  /** The fit leaves residuals within the readings' scatter and the change is plausible. */
   readonly plausible: boolean;
-  /** Change needed relative to its plausible bound (smaller is likelier). */
+  /** Ranking score: χ² + (2·change/bound)² + penalty; smaller is likelier. */
   readonly score: number;
 }
 
@@ -96,6 +113,24 @@ export interface Reconciliation {
   readonly wallThickness: number;
   /** Per mounting read. */
   readonly mountings: readonly MountingReconciliation[];
+  /** Causes fitted to all readings at once, likeliest first (empty when the readings agree). */
+  readonly causes: readonly MismatchCause[];
+  /**
+   * Z/V/W agreement (two or more traverse counts): t − fixed delay = offset + N·perTraverse,
+   * measured and planned, s.
+   */
+  readonly traverseLine?: {
+    /** Measured time outside the bore (delay error, wall, lining, wedge), s. */
+    readonly offset: number;
+    /** Planned time outside the bore, s. */
+    readonly plannedOffset: number;
+    /** Measured time per crossing of the bore, s. */
+    readonly perTraverse: number;
+    /** Planned time per crossing of the bore, s. */
+    readonly plannedPerTraverse: number;
+  };
+  /** Whether the readings can tell delay errors from sound-speed errors (two traverse counts). */
+  readonly separable: boolean;
   /** One-line summary. */
   readonly summary: string;
   /** Warnings (defaults assumed, extrapolations, estimates). */
@@ -104,16 +139,31 @@ export interface Reconciliation {
   readonly trace: readonly TraceEntry[];
 }
 
-/** Plausible bounds of the causes (common practice): temperature error, wall error, gas. */
+/**
+ * Plausible sizes of the causes (common practice, project choices; read as two standard
+ * deviations): temperature, fixed delay, wedge speed, wall, lining, deposits, gas.
+ */
 export const RECONCILE_BOUNDS = {
   /** Largest plausible error in the stated liquid temperature, K. */
   temperature: 15,
   /** Largest plausible error in a liquid temperature measured on site, K. */
   measuredTemperature: 2,
-  /** Largest plausible wall (or lining build-up) error, relative to the wall thickness. */
-  wallRelative: 0.5,
-  /** A sound speed this far below the registry's points to entrained gas, relative. */
-  gasRelative: 0.02,
+  /** Largest plausible error of a stated fixed delay, s. */
+  fixedDelay: 5e-6,
+  /** Largest plausible fixed delay when none is stated, s. */
+  unstatedFixedDelay: 30e-6,
+  /** Largest plausible wedge sound-speed error, relative. */
+  wedgeRelative: 0.03,
+  /** Largest plausible catalogue-wall error (corrosion, another schedule), relative. */
+  wallRelative: 0.3,
+  /** Largest plausible error of a gauged wall, m. */
+  gaugedWall: 0.5e-3,
+  /** Largest plausible lining thickness error, relative. */
+  liningRelative: 0.5,
+  /** Largest plausible deposit layer, relative to the bore radius. */
+  depositRelative: 0.05,
+  /** Largest plausible sound-speed drop from entrained gas, relative. */
+  gasRelative: 0.05,
 } as const;
 
 /**
@@ -167,16 +217,17 @@ export function soundSpeedFromLiquidTime(
 /**
  * Reconcile readings taken on site with the plan.
  *
- * Method: re-plan the site with the measured temperature and wall thickness; per mounting, the
- * liquid time τ = measured total − fixed delay − wall and lining times (which depend only on
- * the Snell invariant, not on the liquid), then the liquid's sound speed from τ
- * ({@link soundSpeedFromLiquidTime}); compare with the registry's at that temperature within
- * two standard uncertainties (liquid data spread, wall tolerance, fixed delay). On a mismatch,
- * each candidate cause is sized: the temperature change that would explain it (from dc/dT), the
- * wall or lining change (the bore that reconciles τ with the registry's speed), registry liquids
- * whose speed matches, and entrained gas (a much lower speed). Flow is recomputed with the
- * measured liquid time in the Snell-invariant form v = c_w·Δt / (2·sin θ_w·τ), and the
- * re-planned bore. Bounds of the causes: {@link RECONCILE_BOUNDS} (common practice).
+ * Method: re-plan the site with the measured temperature and wall thickness. Per mounting, the
+ * liquid time τ = measured total − fixed delay − (planned total − planned liquid time), then
+ * the liquid's sound speed from τ ({@link soundSpeedFromLiquidTime}), compared with the
+ * registry's within two standard uncertainties. On a mismatch, every candidate cause within the
+ * declared liquid (temperature, fixed delay, wedge data, wall, lining, deposits, gas) is fitted
+ * to all readings at once with the clamp-on forward model and ranked by χ² plus plausibility
+ * (lib/site/reconcile_fit.ts); readings of two traverse counts separate delay errors (constant
+ * time) from sound-speed errors (time per crossing). Another registry liquid is offered only
+ * when no cause within the declared one fits. Flow is recomputed with the measured liquid time
+ * in the Snell-invariant form v = c_w·Δt / (2·sin θ_w·τ) and the re-planned bore. Bounds of the
+ * causes: {@link RECONCILE_BOUNDS} (common practice). See docs/readings.md.
  *
  * @param site the site as planned (SI)
  * @param readings the readings (SI)
@@ -235,16 +286,6 @@ export function reconcile(
   const cReg = plan.fluid.soundSpeed;
   const bore = plan.pipe.boreDiameter;
   const wall = plan.pipe.wallThickness;
-  const dcdT = (() => {
-    try {
-      const opts = { salinity: site.fluid.salinity, extrapolate: true, warnings: [] };
-      const a = liquidProperties(site.fluid.liquid, T - 0.5, site.fluid.pressure, opts).soundSpeed;
-      const b = liquidProperties(site.fluid.liquid, T + 0.5, site.fluid.pressure, opts).soundSpeed;
-      return b - a;
-    } catch {
-      return 0;
-    }
-  })();
   const out: MountingReconciliation[] = readings.mountings.map((r, i) => {
     const field = `readings.mountings[${i}]`;
     if (!Number.isInteger(r.traverses) || r.traverses < 1 || r.traverses > 8) {
@@ -254,8 +295,9 @@ export function reconcile(
       throw new InputError(`${field}.totalTime`, String(r.totalTime), "a time > 0");
     }
     const m = plan.mountings.find((x) => x.traverses === r.traverses)!;
-    const fixed = r.fixedDelay ?? 0;
-    const tau = r.totalTime - fixed - m.wallTime - m.liningTime;
+    const fixed = r.fixedDelay ?? site.transducer.fixedDelay ?? 0;
+    // the plan's total less its liquid time: wall, lining and (when its geometry is known) wedge
+    const tau = r.totalTime - fixed - (m.totalTime - m.fluidTime);
     const c = soundSpeedFromLiquidTime(tau, r.traverses, bore, s);
     // standard uncertainty of the inferred speed: wall tolerance (bore), fixed delay, data spread
     const uBore = 2 * (readings.wallThickness !== undefined ? 0.1e-3 : 0.125 * wall / 2) /
@@ -266,98 +308,6 @@ export function reconcile(
     const tolerance = 2 * u;
     const diff = c - cReg;
     const consistent = Math.abs(diff) <= tolerance;
-    const causes: MismatchCause[] = [];
-    if (!consistent) {
-      if (dcdT !== 0) {
-        // the temperature at which the registry's speed equals the inferred one (Newton steps
-        // on c(T), started from the linear estimate)
-        const opts = { salinity: site.fluid.salinity, extrapolate: true, warnings: [] };
-        const cAt = (x: number) =>
-          liquidProperties(site.fluid.liquid, x, site.fluid.pressure, opts).soundSpeed;
-        let Tx = T + diff / dcdT;
-        for (let j = 0; j < 6; j++) {
-          try {
-            const f0 = cAt(Tx) - c;
-            const d = cAt(Tx + 0.05) - cAt(Tx - 0.05);
-            if (!(Math.abs(d) > 0)) break;
-            const step = f0 / (d / 0.1);
-            Tx -= step;
-            if (Math.abs(step) < 1e-6) break;
-          } catch {
-            break;
-          }
-        }
-        const dT = Tx - T;
-        const bound = readings.temperature !== undefined
-          ? RECONCILE_BOUNDS.measuredTemperature
-          : RECONCILE_BOUNDS.temperature;
-        causes.push({
-          cause: "temperature",
-          explanation: `the liquid would be at ${(T + dT - 273.15).toFixed(1)} °C, ` +
-            `${Math.abs(dT).toFixed(1)} K ${dT > 0 ? "warmer" : "colder"} than stated`,
-          plausible: Math.abs(dT) <= bound,
-          score: Math.abs(dT) / bound,
-        });
-      }
-      // the wall change Δ that explains the total time with the registry's speed: the wall time
-      // grows by wallTime/wall per metre while the liquid time shrinks by 2·fluidTime/bore
-      const plannedTotal = m.wallTime + m.liningTime + m.fluidTime;
-      const measuredTotal = r.totalTime - fixed;
-      const slope = m.wallTime / wall - 2 * m.fluidTime / bore;
-      const dWall = (measuredTotal - plannedTotal) / slope;
-      const needBore = bore - 2 * dWall;
-      causes.push({
-        cause: "wall-or-lining",
-        explanation:
-          `the wall (or lining, or scale and deposits inside) would be ${
-            Math.abs(dWall * 1e3).toFixed(2)
-          } mm ` +
-          `${dWall > 0 ? "thicker" : "thinner"} than planned (bore ${
-            (needBore * 1e3).toFixed(1)
-          } mm)`,
-        plausible: Math.abs(dWall) <= RECONCILE_BOUNDS.wallRelative * wall,
-        score: Math.abs(dWall) / (RECONCILE_BOUNDS.wallRelative * wall),
-      });
-      const matches: string[] = [];
-      for (const l of liquids()) {
-        if (l.id === site.fluid.liquid) continue;
-        try {
-          const st = liquidProperties(l.id, T, site.fluid.pressure, { extrapolate: false });
-          if (Math.abs(st.soundSpeed - c) <= tolerance + st.soundSpeedSpread) matches.push(l.id);
-        } catch {
-          // outside that liquid's range: not a candidate
-        }
-      }
-      if (site.fluid.liquid !== "water") {
-        try {
-          const w = liquidProperties("water", T, site.fluid.pressure);
-          if (Math.abs(w.soundSpeed - c) <= tolerance + w.soundSpeedSpread) {
-            matches.unshift("water");
-          }
-        } catch {
-          // not liquid water here
-        }
-      }
-      causes.push({
-        cause: "other-liquid",
-        explanation: matches.length
-          ? `the speed matches ${matches.slice(0, 5).join(", ")} at this temperature`
-          : "no registry liquid matches this speed at this temperature",
-        plausible: matches.length > 0,
-        // a change of liquid is the least likely explanation when the liquid is named
-        score: matches.length > 0 ? 1.5 : 3,
-      });
-      if (diff < -RECONCILE_BOUNDS.gasRelative * cReg) {
-        causes.push({
-          cause: "gas",
-          explanation: `${(-diff / cReg * 100).toFixed(1)} % below the registry's speed: ` +
-            "entrained air or gas lowers the apparent speed and weakens the signal",
-          plausible: true,
-          score: 1.2,
-        });
-      }
-      causes.sort((a, b) => Number(b.plausible) - Number(a.plausible) || a.score - b.score);
-    }
     let flow: MountingReconciliation["flow"];
     const pm = planned.mountings.find((x) => x.traverses === r.traverses) ??
       plan.mountings.find((x) => x.traverses === r.traverses)!;
@@ -406,18 +356,58 @@ export function reconcile(
       difference: diff,
       tolerance,
       consistent,
-      causes,
+      causes: [] as MismatchCause[],
       flow,
     };
   });
   const bad = out.filter((m) => !m.consistent);
+  const stated = readings.mountings.map((r) => r.fixedDelay ?? site.transducer.fixedDelay);
+  const timeReadings: TimeReading[] = readings.mountings.map((r, i) => ({
+    traverses: r.traverses,
+    totalTime: r.totalTime,
+    fixedDelay: stated[i] ?? 0,
+  }));
+  const setup = forwardSetup(site, plan, T, reg);
+  const separable = new Set(timeReadings.map((r) => r.traverses)).size >= 2;
+  if (!separable && bad.length > 0) {
+    warnings.push({
+      code: "reconcile-one-traverse",
+      message: "readings of one traverse count cannot tell a delay error from a sound-speed " +
+        "error: read a second mounting (Z and V, or V and W) on the same pipe",
+    });
+  }
+  const causes = bad.length === 0 ? [] : rankCauses(site, readings, setup, timeReadings, {
+    delayStated: stated.some((d) => d !== undefined),
+    wallGauged: readings.wallThickness !== undefined,
+    temperatureMeasured: readings.temperature !== undefined,
+    T,
+  });
+  const line = traverseLine(timeReadings);
+  let tLine: Reconciliation["traverseLine"];
+  if (line) {
+    const ns = [...new Set(timeReadings.map((r) => r.traverses))];
+    const planned = traverseLine(ns.map((n) => ({
+      traverses: n,
+      fixedDelay: 0,
+      totalTime:
+        predictTimes({ setup, delay: 0 }, [{ traverses: n, totalTime: 0, fixedDelay: 0 }])[0],
+    })))!;
+    tLine = {
+      offset: line.offset,
+      plannedOffset: planned.offset,
+      perTraverse: line.perTraverse,
+      plannedPerTraverse: planned.perTraverse,
+    };
+  }
+  const withCauses = out.map((m) => m.consistent ? m : { ...m, causes });
   const summary = bad.length === 0
     ? "readings agree with the plan within their uncertainty"
-    : `readings disagree with the plan on ${bad.length} mounting(s); likeliest cause: ` +
-      (bad[0].causes[0]?.explanation ?? "unknown");
+    : `readings disagree with the plan on ${bad.length} ${
+      bad.length === 1 ? "mounting" : "mountings"
+    }; likeliest cause: ` + (causes[0]?.explanation ?? "none found");
   tr.push(
     traceEntry(
-      "reconciliation bounds (temperature, wall, gas)",
+      "reconciliation bounds (plausible sizes of the causes)",
       JSON.stringify(RECONCILE_BOUNDS),
       "",
       "common-practice",
@@ -429,9 +419,193 @@ export function reconcile(
     registryHash: reg.hash,
     temperature: T,
     wallThickness: wall,
-    mountings: out,
+    mountings: withCauses,
+    causes,
+    traverseLine: tLine,
+    separable,
     summary,
     warnings: [...plan.warnings, ...warnings],
     trace: tr,
   };
+}
+
+/** The planned setup the causes perturb, from the re-planned site. */
+function forwardSetup(site: SiteInput, plan: SitePlan, T: number, reg: Registry): ForwardSetup {
+  const opts = {
+    salinity: site.fluid.salinity,
+    formulation: site.fluid.formulation,
+    extrapolate: true,
+    warnings: [],
+  };
+  const cAt = (dT: number) =>
+    liquidProperties(site.fluid.liquid, T + dT, site.fluid.pressure, opts).soundSpeed;
+  // the plan's own wedge speed 1 K warmer: whatever temperature rule the plan applies
+  let perK = 0;
+  try {
+    const warm: SiteInput = {
+      ...site,
+      fluid: { ...site.fluid, temperature: T + 1, temperatureRange: undefined },
+      mountings: [plan.mountings[0].traverses],
+    };
+    perK = planSite(warm, { registry: reg, monteCarlo: false }).transducer.wedgeSoundSpeed -
+      plan.transducer.wedgeSoundSpeed;
+  } catch {
+    perK = 0;
+  }
+  const td = site.transducer;
+  return {
+    outsideDiameter: plan.pipe.outsideDiameter,
+    wallThickness: plan.pipe.wallThickness,
+    wallSoundSpeed: plan.pipe.wallSoundSpeed,
+    wallShearSpeed: plan.pipe.wallShearSpeed,
+    lining: plan.pipe.lining.map((l) => ({ thickness: l.thickness, soundSpeed: l.soundSpeed })),
+    fluidSoundSpeed: plan.fluid.soundSpeed,
+    wedgeSoundSpeed: plan.transducer.wedgeSoundSpeed,
+    wedgeAngle: plan.transducer.wedgeAngle,
+    wedge: td.elementHeight !== undefined || td.indexOffset !== undefined
+      ? { elementHeight: td.elementHeight, indexOffset: td.indexOffset }
+      : undefined,
+    wedgeSpeedPerKelvin: perK,
+    soundSpeedAt: cAt,
+  };
+}
+
+const us = (x: number, d = 2) => `${(x * 1e6).toFixed(d)} µs`;
+const mmStr = (x: number, d = 2) => `${(x * 1e3).toFixed(d)} mm`;
+
+/** Words with figures for a fitted cause. */
+function explain(
+  f: FittedCause,
+  setup: ForwardSetup,
+  ctx: { readonly T: number; readonly temperatureMeasured: boolean; readonly delay: number },
+): string {
+  const v = f.value;
+  const more = (x: number, up: string, down: string) => (x >= 0 ? up : down);
+  switch (f.cause) {
+    case "temperature":
+      return `temperature ${Math.abs(v).toFixed(1)} K ${more(v, "higher", "lower")} than ${
+        ctx.temperatureMeasured ? "measured" : "stated"
+      } (liquid at ${(ctx.T + v - 273.15).toFixed(1)} °C)`;
+    case "fixed-delay":
+      return `fixed delay ${us(Math.abs(v))} ${more(v, "larger", "smaller")} (${
+        us(ctx.delay + v)
+      } instead of ${us(ctx.delay)})`;
+    case "wedge": {
+      const sinNew = Math.sin(setup.wedgeAngle) * setup.wedgeSoundSpeed /
+        (setup.wedgeSoundSpeed + v);
+      const dAngle = sinNew < 1 ? (Math.asin(sinNew) - setup.wedgeAngle) * 180 / Math.PI : NaN;
+      return `wedge sound speed ${Math.abs(v).toFixed(0)} m/s ${more(v, "higher", "lower")} (${
+        (setup.wedgeSoundSpeed + v).toFixed(0)
+      } m/s)` + (Number.isFinite(dAngle)
+        ? `, or a wedge angle ${Math.abs(dAngle).toFixed(2)}° ${more(dAngle, "larger", "smaller")}`
+        : "");
+    }
+    case "wall":
+      return `wall ${mmStr(Math.abs(v))} ${more(v, "thicker", "thinner")} (${
+        mmStr(setup.wallThickness + v)
+      } instead of ${mmStr(setup.wallThickness)})`;
+    case "lining":
+      return `lining ${mmStr(Math.abs(v))} ${more(v, "thicker", "thinner")} (${
+        mmStr(setup.lining[0].thickness + v)
+      } instead of ${mmStr(setup.lining[0].thickness)})`;
+    case "deposits":
+      return `a deposit layer ${
+        mmStr(v)
+      } thick inside the bore (sound speed ${FIT_ASSUMPTIONS.depositSoundSpeed} m/s assumed)`;
+    case "gas":
+      return `liquid sound speed ${(-v * 100).toFixed(1)} % lower than the registry's: ` +
+        "entrained gas or air (it also weakens the signal)";
+    default:
+      return f.cause;
+  }
+}
+
+/** Fit every cause, explain, rank; another liquid only when nothing within the declared fits. */
+function rankCauses(
+  site: SiteInput,
+  readings: FieldReadings,
+  setup: ForwardSetup,
+  timeReadings: readonly TimeReading[],
+  ctx: {
+    readonly delayStated: boolean;
+    readonly wallGauged: boolean;
+    readonly temperatureMeasured: boolean;
+    readonly T: number;
+  },
+): MismatchCause[] {
+  const B = RECONCILE_BOUNDS;
+  const models = causeModels(setup, {
+    temperature: ctx.temperatureMeasured ? B.measuredTemperature : B.temperature,
+    fixedDelay: ctx.delayStated ? B.fixedDelay : B.unstatedFixedDelay,
+    wedgeRelative: B.wedgeRelative,
+    wall: ctx.wallGauged ? B.gaugedWall : B.wallRelative * setup.wallThickness,
+    liningRelative: B.liningRelative,
+    deposit: B.depositRelative * (setup.outsideDiameter / 2 - setup.wallThickness),
+    gasRelative: B.gasRelative,
+  });
+  const delay = timeReadings[0].fixedDelay;
+  const fitted = models.map((m) => fitCause(m, setup, timeReadings))
+    .filter((f) =>
+      Number.isFinite(f.score) && !(f.cause === "deposits" && f.value <= 0) &&
+      !(f.cause === "gas" && f.value >= 0)
+    );
+  const out: MismatchCause[] = fitted.map((f) => ({
+    cause: f.cause,
+    explanation: explain(f, setup, { ...ctx, delay }),
+    value: f.value,
+    unit: f.unit,
+    rmsResidual: f.rmsResidual,
+    plausible: f.plausible,
+    score: f.score,
+  }));
+  if (!out.some((c) => c.plausible)) out.push(...otherLiquids(site, readings, setup, timeReadings));
+  return out.sort((a, b) => Number(b.plausible) - Number(a.plausible) || a.score - b.score);
+}
+
+/** Registry liquids whose sound speed at the temperature explains the readings. */
+function otherLiquids(
+  site: SiteInput,
+  readings: FieldReadings,
+  setup: ForwardSetup,
+  timeReadings: readonly TimeReading[],
+): MismatchCause[] {
+  const T = readings.temperature ?? site.fluid.temperature;
+  const sd = FIT_ASSUMPTIONS.readingTimeSd;
+  const out: MismatchCause[] = [];
+  for (const l of liquids()) {
+    if (l.id === site.fluid.liquid) continue;
+    let st;
+    try {
+      st = liquidProperties(l.id, T, site.fluid.pressure, { extrapolate: false });
+    } catch {
+      continue; // outside that liquid's range: not a candidate
+    }
+    let r: number[];
+    try {
+      const t = predictTimes({ setup: { ...setup, fluidSoundSpeed: st.soundSpeed }, delay: 0 }, [
+        ...timeReadings,
+      ]);
+      r = timeReadings.map((x, i) => x.totalTime - t[i]);
+    } catch {
+      continue;
+    }
+    const rms = Math.sqrt(r.reduce((a, v) => a + v * v, 0) / r.length);
+    // the liquid's own data spread, as a time: the liquid time scales as 1/c (to first order)
+    const slack = st.soundSpeedSpread / st.soundSpeed *
+      Math.max(...timeReadings.map((x) => x.totalTime - x.fixedDelay));
+    if (rms > 2 * sd + slack) continue;
+    out.push({
+      cause: "other-liquid",
+      explanation: `the readings fit ${l.id} at this temperature (${
+        st.soundSpeed.toFixed(0)
+      } m/s against ${setup.fluidSoundSpeed.toFixed(0)} m/s for ${site.fluid.liquid})`,
+      value: st.soundSpeed,
+      unit: "m/s",
+      rmsResidual: rms,
+      plausible: rms <= 2 * sd,
+      // a change of liquid is the least likely explanation when the liquid is named
+      score: r.reduce((a, v) => a + (v / sd) ** 2, 0) + 6,
+    });
+  }
+  return out.sort((a, b) => a.score - b.score).slice(0, 5);
 }

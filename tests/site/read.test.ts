@@ -297,7 +297,7 @@ Deno.test("CSV fleet: good rows read, bad rows reported by line, others kept", a
   assert.deepEqual(sites[1].defaults.map((d) => d.field), ["pipe.standard", "fluid.pressure"]);
   assert.deepEqual(errors.map((e) => e.row), [4, 8, 9]);
   assert.ok(
-    errors[0].message.startsWith("fleet.csv row 4: fluid.temperature: got"),
+    errors[0].message.startsWith("fleet.csv row 4 (site P2): fluid.temperature: got"),
     errors[0].message,
   );
   assert.ok(errors[1].message.includes('id: got "P1"') && errors[1].message.includes("row 3"));
@@ -346,4 +346,18 @@ Deno.test("files: readSiteFile, readSitesCsvFile and siteFiles on a folder", asy
   } finally {
     await Deno.remove(dir, { recursive: true });
   }
+});
+
+Deno.test("CSV row errors name the site id and give the column to fill, not YAML syntax", async () => {
+  const { readSitesCsv } = await import("../../lib/site/read.ts");
+  const csv = "id,name,pipe.nps,pipe.schedule,pipe.material,fluid.liquid,fluid.temperature," +
+    "flow.minimum,flow.maximum,transducer.wedgeMaterial,transducer.wedgeAngle," +
+    "transducer.frequency,mountings,run.length,run.upstream.fitting\n" +
+    "s1,A (invented),4,40,carbon-steel,water,20 degC,2 L/s,10 L/s,acrylic,38 deg,1 MHz,V,5 m," +
+    "elbow-90\n";
+  const { errors } = await readSitesCsv(csv, { file: "f.csv" });
+  assert.equal(errors.length, 1);
+  assert.match(errors[0].message, /^f\.csv row 2 \(site s1\): run\.downstream: got nothing/);
+  assert.match(errors[0].message, /column run\.downstream\.fitting/);
+  assert.ok(!errors[0].message.includes("{"), errors[0].message);
 });
