@@ -106,12 +106,17 @@ Deno.test("pipe property: measured pipes hold their invariants or are refused by
         const o = tally.add(outcome(`pipe(${JSON.stringify(spec)})`, () => pipe(spec)));
         const sum = layers.reduce((s, l) => s + l.thickness, 0);
         if (o.ok) {
+          assert.notEqual(material, "unobtainium", "an unknown material must be refused");
           invariants(o.value, sum);
           const od = o.value.outsideDiameter;
           assert.ok(od >= PLAUSIBLE_OUTSIDE_DIAMETER[0] && od <= PLAUSIBLE_OUTSIDE_DIAMETER[1]);
           return;
         }
-        // A plainly good measured pipe must not be refused.
+        // A plainly good measured pipe must not be refused; an unknown material always is.
+        if (material === "unobtainium") {
+          assert.match(o.error.message, /material/);
+          return;
+        }
         const good = !byCircumference && size >= 0.003 && size <= 6 && wall > 0 &&
           wallFraction < 0.49 && layers.every((l) => l.material && l.thickness > 0) &&
           sum < 0.45 * (size - 2 * wall) && Number.isFinite(sum);
