@@ -38,51 +38,9 @@ import { gumPropagate, monteCarlo, type UncertainInput } from "../uncertainty/mo
 import { flowModel, MODEL_INPUTS } from "./model.ts";
 import type { SiteInput } from "./schema.ts";
 
-/** Assumptions of the plan that no site file states: each is common practice or recalled. */
-export const PLAN_ASSUMPTIONS = {
-  /** Half-width of the wedge-angle uncertainty (machining and mounting), rad. */
-  wedgeAngleHalfWidth: 0.2 * Math.PI / 180,
-  /** Half-width of the wedge temperature's departure from the liquid's, K. */
-  wedgeTemperatureHalfWidth: 2,
-  /** Relative half-width of a wedge sound speed stated without a material, dimensionless. */
-  statedWedgeSpeedRelative: 0.003,
-  /** Relative half-width of a lining's thickness (linings are uneven), dimensionless. */
-  liningThicknessRelative: 0.2,
-  /** Relative half-width of a lining's sound speed when only its material is known. */
-  liningSpeedRelative: 0.05,
-  /** Half-width of a thickness-gauge reading, m. */
-  gaugeHalfWidth: 0.1e-3,
-  /** Half-width of a circumference taped round the pipe, m. */
-  tapeHalfWidth: 1e-3,
-  /** Half-width of an outside diameter measured with a caliper, m. */
-  caliperHalfWidth: 0.5e-3,
-  /** Half-width of the fixed delay (electronics, cables, couplant) after zero setting, s. */
-  fixedDelayHalfWidth: 50e-9,
-  /** Timing resolution assumed when the site states none, s. */
-  defaultTimingResolution: 100e-12,
-  /** Δt at minimum flow must exceed this multiple of the timing offset to count resolvable. */
-  resolvableMultiple: 100,
-  /** Outside-diameter half-width when the catalogue gives no tolerance, relative. */
-  defaultOdRelative: 0.005,
-} as const;
-
-const ASSUMPTION_TEXT: Record<keyof typeof PLAN_ASSUMPTIONS, [string, string]> = {
-  wedgeAngleHalfWidth: ["wedge angle uncertainty, half-width", "rad"],
-  wedgeTemperatureHalfWidth: ["wedge temperature departure from the liquid's, half-width", "K"],
-  statedWedgeSpeedRelative: ["stated wedge sound speed, relative half-width", ""],
-  liningThicknessRelative: ["lining thickness, relative half-width", ""],
-  liningSpeedRelative: ["lining sound speed from its material, relative half-width", ""],
-  gaugeHalfWidth: ["thickness-gauge reading, half-width", "m"],
-  tapeHalfWidth: ["circumference taped round the pipe, half-width", "m"],
-  caliperHalfWidth: ["outside diameter by caliper, half-width", "m"],
-  fixedDelayHalfWidth: ["fixed delay after zero setting, half-width", "s"],
-  defaultTimingResolution: ["timing resolution when none is stated", "s"],
-  resolvableMultiple: [
-    "Δt at minimum flow over timing offset, least ratio to count resolvable",
-    "",
-  ],
-  defaultOdRelative: ["outside diameter, relative half-width when no tolerance is known", ""],
-};
+export { PLAN_ASSUMPTIONS } from "./stages/assumptions.ts";
+import { ASSUMPTION_TEXT, fmtMm, halfWidthTol, PLAN_ASSUMPTIONS } from "./stages/assumptions.ts";
+import { planPipe } from "./stages/pipe.ts";
 
 /** Options of {@link planSite}. */
 export interface PlanOptions {
@@ -379,13 +337,6 @@ function mountingName(traverses: number): string {
   return MOUNTING_NAMES[traverses] ?? `${traverses}-traverse`;
 }
 
-function halfWidthTol(t: { plus?: number; minus?: number } | undefined): number | undefined {
-  if (!t) return undefined;
-  const p = t.plus ?? 0, m = t.minus ?? 0;
-  const h = (Math.abs(p) + Math.abs(m)) / 2;
-  return h > 0 ? h : undefined;
-}
-
 /**
  * Plan one site.
  *
@@ -427,109 +378,12 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
 
   // --- pipe --------------------------------------------------------------------------
   const sp = site.pipe;
-  const liningIn = sp.lining
-    ? [{ material: sp.lining.material, thickness: sp.lining.thickness }]
-    : undefined;
-  let spec: PipeSpec;
-  if (sp.geometry === "measured") {
-    if (!sp.material) {
-      throw new InputError("pipe.material", "nothing", "a material id for a measured pipe");
-    }
-    spec = {
-      outsideDiameter: sp.outsideDiameter,
-      circumference: sp.circumference,
-      wallThickness: sp.wallThickness!,
-      material: sp.material,
-      lining: liningIn,
-      uncertainty: {
-        outsideDiameter: sp.outsideDiameter !== undefined
-          ? PLAN_ASSUMPTIONS.caliperHalfWidth
-          : undefined,
-        circumference: sp.circumference !== undefined ? PLAN_ASSUMPTIONS.tapeHalfWidth : undefined,
-        wallThickness: PLAN_ASSUMPTIONS.gaugeHalfWidth,
-      },
-    };
-  } else {
-    spec = {
-      standard: sp.standard!,
-      nps: sp.nps!,
-      schedule: sp.schedule!,
-      material: sp.material,
-      lining: liningIn,
-    };
-  }
-  const pipeWarnings: Warning[] = [];
-  const rp: ResolvedPipe = resolvePipe(spec, { registry: reg, warnings: pipeWarnings });
-  warnings.push(...pipeWarnings);
-  addTrace(rp.trace);
-  const materialId = sp.material ?? rp.material;
-  const mat = reg.material(materialId);
-  addTrace(mat.trace);
+  const pipeStage = planPipe({ pipe: sp, registry: reg });
+  warnings.push(...pipeStage.warnings);
+  addTrace(pipeStage.trace);
+  const { rp, mat, materialId, wallL, wallS, wallThickness, lining, insideDiameter, bore, area } =
+    pipeStage;
   const T = site.fluid.temperature;
-  const wallL = sp.wallSoundSpeed ?? mat.longitudinal;
-  const wallS = sp.wallShearSpeed ?? mat.shear;
-  if (sp.wallSoundSpeed !== undefined) {
-    tr.push(
-      traceEntry("wall longitudinal sound speed (site override)", wallL, "m/s", "site", "input"),
-    );
-  }
-  if (sp.wallShearSpeed !== undefined) {
-    tr.push(traceEntry("wall shear sound speed (site override)", wallS!, "m/s", "site", "input"));
-  }
-  let wallThickness = rp.wallThickness;
-  if (sp.measuredWallThickness !== undefined) {
-    const tolerance = halfWidthTol(rp.tolerances?.wallThickness);
-    const diff = sp.measuredWallThickness - rp.wallThickness;
-    if (tolerance !== undefined && Math.abs(diff) > tolerance) {
-      warnings.push({
-        code: "wall-differs",
-        message: `measured wall ${fmtMm(sp.measuredWallThickness)} differs from the nominal ` +
-          `${fmtMm(rp.wallThickness)} by more than its tolerance: the measured value is used`,
-      });
-    }
-    wallThickness = sp.measuredWallThickness;
-    tr.push(
-      traceEntry(
-        "wall thickness (thickness-gauge reading)",
-        wallThickness,
-        "m",
-        "site",
-        "measured",
-      ),
-    );
-  }
-  if (!(wallThickness < rp.outsideDiameter / 2)) {
-    throw new InputError(
-      "pipe.measuredWallThickness",
-      fmtMm(wallThickness),
-      "less than the outside radius",
-    );
-  }
-  const lining = rp.lining.map((l, i) => {
-    const override = i === 0 ? sp.lining?.soundSpeed : undefined;
-    let c = override;
-    if (c === undefined) {
-      const lm = reg.material(l.material);
-      addTrace(lm.trace);
-      c = lm.longitudinal;
-    } else tr.push(traceEntry("lining sound speed (site override)", c, "m/s", "site", "input"));
-    return {
-      material: l.material,
-      thickness: l.thickness,
-      soundSpeed: c,
-      overridden: override !== undefined,
-    };
-  });
-  const insideDiameter = rp.outsideDiameter - 2 * wallThickness;
-  const bore = insideDiameter - 2 * lining.reduce((s, l) => s + l.thickness, 0);
-  if (!(bore > 0)) {
-    throw new InputError(
-      "pipe.lining.thickness",
-      fmtMm(lining[0]?.thickness ?? 0),
-      "a lining thinner than the inside radius",
-    );
-  }
-  const area = Math.PI / 4 * bore * bore;
 
   // --- fluid ---------------------------------------------------------------------------
   const fl = site.fluid;
@@ -1265,10 +1119,6 @@ function dedupeTrace(tr: readonly TraceEntry[]): TraceEntry[] {
     out.push(t);
   }
   return out;
-}
-
-function fmtMm(x: number): string {
-  return `${Number((x * 1000).toPrecision(4))} mm`;
 }
 
 /** Re-exported for reports: the model's input names, in order. */
