@@ -41,6 +41,7 @@ import type { SiteInput } from "./schema.ts";
 export { PLAN_ASSUMPTIONS } from "./stages/assumptions.ts";
 import { ASSUMPTION_TEXT, fmtMm, halfWidthTol, PLAN_ASSUMPTIONS } from "./stages/assumptions.ts";
 import { planPipe } from "./stages/pipe.ts";
+import { planLiquid } from "./stages/liquid.ts";
 
 /** Options of {@link planSite}. */
 export interface PlanOptions {
@@ -387,27 +388,10 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
 
   // --- fluid ---------------------------------------------------------------------------
   const fl = site.fluid;
-  const liqWarnings: Warning[] = [];
-  const liq: LiquidState = liquidProperties(fl.liquid, T, fl.pressure, {
-    salinity: fl.salinity,
-    formulation: fl.formulation,
-    warnings: liqWarnings,
-  });
-  warnings.push(...liqWarnings);
-  addTrace(liq.trace);
-  const c = fl.soundSpeed ?? liq.soundSpeed;
-  const rho = fl.density ?? liq.density;
-  const nu = fl.kinematicViscosity ?? liq.kinematicViscosity;
-  if (fl.soundSpeed !== undefined) {
-    tr.push(traceEntry("liquid sound speed (site override)", c, "m/s", "site", "input"));
-  }
-  if (fl.density !== undefined) {
-    tr.push(traceEntry("liquid density (site override)", rho, "kg/m^3", "site", "input"));
-  }
-  if (fl.kinematicViscosity !== undefined) {
-    tr.push(traceEntry("liquid kinematic viscosity (site override)", nu, "m^2/s", "site", "input"));
-  }
-  const cSpread = fl.soundSpeed !== undefined ? 0 : liq.soundSpeedSpread;
+  const liquidStage = planLiquid({ fluid: fl });
+  warnings.push(...liquidStage.warnings);
+  addTrace(liquidStage.trace);
+  const { liq, c, rho, nu, cSpread } = liquidStage;
 
   // --- transducer ----------------------------------------------------------------------
   const td = site.transducer;
