@@ -13,8 +13,7 @@
 import { InputError, NoPhysicalAnswerError, type Warning } from "../errors.ts";
 import { trace as traceEntry, type TraceEntry } from "../trace.ts";
 import { defaultRegistry, type Registry } from "../registry/mod.ts";
-import { pipe as resolvePipe, type PipeSpec, type ResolvedPipe } from "../pipe/mod.ts";
-import { liquidProperties, type LiquidState } from "../liquids/mod.ts";
+import { liquidProperties } from "../liquids/mod.ts";
 import {
   type ClampOnInputs,
   type ClampOnPath,
@@ -39,7 +38,7 @@ import { flowModel, MODEL_INPUTS } from "./model.ts";
 import type { SiteInput } from "./schema.ts";
 
 export { PLAN_ASSUMPTIONS } from "./stages/assumptions.ts";
-import { ASSUMPTION_TEXT, fmtMm, halfWidthTol, PLAN_ASSUMPTIONS } from "./stages/assumptions.ts";
+import { ASSUMPTION_TEXT, halfWidthTol, PLAN_ASSUMPTIONS } from "./stages/assumptions.ts";
 import { planPipe } from "./stages/pipe.ts";
 import { planLiquid } from "./stages/liquid.ts";
 
