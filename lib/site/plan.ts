@@ -26,7 +26,6 @@ import {
   transitTimes,
   wallBorneSignal,
 } from "../acoustics/mod.ts";
-import { frictionFactor, profileFactorEstimate, reynoldsNumber } from "../flow/mod.ts";
 import {
   checkStraightRun,
   profileErrorEstimate,
@@ -41,6 +40,7 @@ export { PLAN_ASSUMPTIONS } from "./stages/assumptions.ts";
 import { ASSUMPTION_TEXT, halfWidthTol, PLAN_ASSUMPTIONS } from "./stages/assumptions.ts";
 import { planPipe } from "./stages/pipe.ts";
 import { planLiquid } from "./stages/liquid.ts";
+import { planOperatingPoints } from "./stages/points.ts";
 
 /** Options of {@link planSite}. */
 export interface PlanOptions {
@@ -454,48 +454,12 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
     });
   }
   const rr = roughness / bore;
-  const flows: { label: OperatingPoint["label"]; q: number }[] = [];
-  const toFlow = (x: number) => site.flow.quantity === "velocity" ? x * area : x;
-  flows.push({ label: "minimum", q: toFlow(site.flow.minimum) });
-  if (site.flow.design !== undefined) flows.push({ label: "design", q: toFlow(site.flow.design) });
-  flows.push({ label: "maximum", q: toFlow(site.flow.maximum) });
-  const flowWarnings: Warning[] = [];
-  const points: OperatingPoint[] = flows.map(({ label, q }) => {
-    const V = q / area;
-    const re = reynoldsNumber(V, bore, nu);
-    const est = profileFactorEstimate(re, {
-      relativeRoughness: rr,
-      extrapolate: true,
-      warnings: flowWarnings,
-    });
-    const f = frictionFactor(re, rr, "colebrook", { extrapolate: true, warnings: flowWarnings });
-    return {
-      label,
-      flowRate: q,
-      meanVelocity: V,
-      reynolds: re,
-      regime: est.regime,
-      profileFactor: est.factor,
-      profileFactorSpread: est.spread,
-      pathVelocity: V / est.factor,
-      frictionFactor: f,
-    };
-  });
-  for (const w of flowWarnings) {
+  const pointsStage = planOperatingPoints({ flow: site.flow, bore, area, roughness, nu });
+  const { points, profileFactorChange } = pointsStage;
+  for (const w of pointsStage.warnings) {
     if (!warnings.some((x) => x.message === w.message)) warnings.push(w);
   }
-  const kValues = points.map((p) => p.profileFactor);
-  const profileFactorChange = (Math.max(...kValues) - Math.min(...kValues)) /
-    ((Math.max(...kValues) + Math.min(...kValues)) / 2);
-  tr.push(
-    traceEntry(
-      "formulation: profile factor (power law, Nikuradse n; spread over models)",
-      "lib/flow",
-      "",
-      "common-practice",
-      "computed",
-    ),
-  );
+  addTrace(pointsStage.trace);
 
   // --- mountings -----------------------------------------------------------------------
   const baseInputs = (n: number): ClampOnInputs => ({
