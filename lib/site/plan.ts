@@ -41,6 +41,7 @@ import { ASSUMPTION_TEXT, halfWidthTol, PLAN_ASSUMPTIONS } from "./stages/assump
 import { planPipe } from "./stages/pipe.ts";
 import { planLiquid } from "./stages/liquid.ts";
 import { planOperatingPoints } from "./stages/points.ts";
+import { planTransducer } from "./stages/transducer.ts";
 
 /** Options of {@link planSite}. */
 export interface PlanOptions {
@@ -394,51 +395,11 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
 
   // --- transducer ----------------------------------------------------------------------
   const td = site.transducer;
-  let cw: number;
-  let dcwdT: number;
-  let cwHalf: number;
-  let wedgeDensity = 1180;
-  let wedgeAtt: { value: number; frequency: number } | undefined;
-  if (td.wedgeMaterial) {
-    const wm = reg.material(td.wedgeMaterial);
-    addTrace(wm.trace);
-    wedgeDensity = wm.density;
-    wedgeAtt = wm.attenuation;
-    dcwdT = td.wedgeTemperatureCoefficient ?? wm.dLongitudinalDT ?? 0;
-    cw = td.wedgeSoundSpeed ?? wm.longitudinal + dcwdT * (T - wm.referenceTemperature);
-    cwHalf = td.wedgeSoundSpeed !== undefined
-      ? PLAN_ASSUMPTIONS.statedWedgeSpeedRelative * cw
-      : wm.longitudinalSpread ?? PLAN_ASSUMPTIONS.statedWedgeSpeedRelative * cw;
-    if (td.wedgeSoundSpeed === undefined && dcwdT !== 0) {
-      tr.push(
-        traceEntry("wedge sound speed at the liquid temperature", cw, "m/s", wm.source, "computed"),
-      );
-    }
-  } else if (td.wedgeSoundSpeed !== undefined) {
-    cw = td.wedgeSoundSpeed;
-    dcwdT = td.wedgeTemperatureCoefficient ?? 0;
-    cwHalf = PLAN_ASSUMPTIONS.statedWedgeSpeedRelative * cw;
-    tr.push(traceEntry("wedge sound speed (site)", cw, "m/s", "site", "input"));
-    if (td.wedgeTemperatureCoefficient === undefined) {
-      warnings.push({
-        code: "wedge-temperature",
-        message: "no wedge material or temperature coefficient: the wedge speed is held constant " +
-          "over temperature",
-      });
-    }
-  } else {
-    throw new InputError("transducer", "neither wedgeSoundSpeed nor wedgeMaterial", "one of them");
-  }
-  tr.push(traceEntry("wedge angle (site)", td.wedgeAngle, "rad", "site", "input"));
-  const timingResolution = td.timingResolution ?? PLAN_ASSUMPTIONS.defaultTimingResolution;
-  if (td.timingResolution === undefined) {
-    warnings.push({
-      code: "default",
-      message: `no timing resolution stated: ${timingResolution * 1e12} ps assumed`,
-    });
-  }
-  const zeroOffset = Math.abs(td.zeroOffset ?? timingResolution);
-  const timingOffset = Math.max(zeroOffset, timingResolution);
+  const tdStage = planTransducer({ transducer: td, temperature: T, registry: reg });
+  warnings.push(...tdStage.warnings);
+  addTrace(tdStage.trace);
+  const { cw, dcwdT, cwHalf, wedgeDensity, wedgeAtt, timingResolution, zeroOffset, timingOffset } =
+    tdStage;
 
   for (const [k, v] of Object.entries(PLAN_ASSUMPTIONS)) {
     const [text, unit] = ASSUMPTION_TEXT[k as keyof typeof PLAN_ASSUMPTIONS];
