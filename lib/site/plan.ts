@@ -26,12 +26,6 @@ import {
   transitTimes,
   wallBorneSignal,
 } from "../acoustics/mod.ts";
-import {
-  checkStraightRun,
-  profileErrorEstimate,
-  rankPositions,
-  resolveFitting,
-} from "../installation/mod.ts";
 import { gumPropagate, monteCarlo, type UncertainInput } from "../uncertainty/mod.ts";
 import { flowModel, MODEL_INPUTS } from "./model.ts";
 import type { SiteInput } from "./schema.ts";
@@ -42,6 +36,7 @@ import { planPipe } from "./stages/pipe.ts";
 import { planLiquid } from "./stages/liquid.ts";
 import { planOperatingPoints } from "./stages/points.ts";
 import { planTransducer } from "./stages/transducer.ts";
+import { planStraightRun } from "./stages/run.ts";
 
 /** Options of {@link planSite}. */
 export interface PlanOptions {
@@ -541,96 +536,19 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
   }
 
   // --- straight run --------------------------------------------------------------------
-  let straightRun: SitePlan["straightRun"];
-  let installHalf = 0;
-  const reList = points.map((p) => p.reynolds);
-  const designPoint = points.find((p) => p.label === "design") ?? points[points.length - 1];
   // the mounting the run is ranked for: the first usable one by the rule below (V by default)
   const provisional = chooseMounting(mountingPlans);
-  if (site.run) {
-    const run = site.run;
-    const upFit = resolveFitting(run.upstream.fitting);
-    const downFit = resolveFitting(run.downstream.fitting);
-    const rank = rankPositions({
-      runLength: run.length,
-      diameter: bore,
-      upstream: { fitting: upFit.id, orientation: run.upstream.orientation },
-      downstream: { fitting: downFit.id },
-      traverses: provisional.traverses,
-      reynolds: reList,
-      fluidAngle: provisional.fluidAngle,
-    });
-    const position = run.plannedPosition ?? rank.recommendedPosition;
-    const orientation = run.plannedPosition !== undefined
-      ? run.upstream.orientation ?? 0
-      : rank.recommendedOrientation;
-    const check = checkStraightRun({
-      diameter: bore,
-      upstream: { fitting: upFit.id, distance: position },
-      downstream: { fitting: downFit.id, distance: run.length - position },
-    });
-    addTrace(check.trace);
-    const est = profileErrorEstimate({
-      distanceDiameters: position / bore,
-      fitting: upFit.id,
-      orientation,
-      traverses: provisional.traverses,
-      reynolds: designPoint.reynolds,
-      fluidAngle: provisional.fluidAngle,
-      relativeRoughness: rr,
-    });
-    installHalf = Math.abs(est.error) + est.spread;
-    const along: { position: number; error: number }[] = [];
-    for (let i = 0; i <= 40; i++) {
-      const x = run.length * i / 40;
-      along.push({
-        position: x,
-        error: profileErrorEstimate({
-          distanceDiameters: x / bore,
-          fitting: upFit.id,
-          orientation,
-          traverses: provisional.traverses,
-          reynolds: designPoint.reynolds,
-          fluidAngle: provisional.fluidAngle,
-          relativeRoughness: rr,
-        }).error,
-      });
-    }
-    tr.push(
-      traceEntry(
-        "formulation: distorted-profile model (estimate)",
-        "lib/installation",
-        "",
-        "snellpath-installation-model",
-        "recalled",
-      ),
-    );
-    straightRun = {
-      verdict: check.verdict,
-      position,
-      positionSource: run.plannedPosition !== undefined ? "planned" : "recommended",
-      upstreamDiameters: check.upstreamDiameters,
-      downstreamDiameters: check.downstreamDiameters,
-      requiredUpstream: check.requiredUpstream,
-      requiredDownstream: check.requiredDownstream,
-      commonPracticePosition: rank.commonPracticePosition,
-      recommendedPosition: rank.recommendedPosition,
-      recommendedOrientation: rank.recommendedOrientation,
-      estimatedProfileError: est.error,
-      estimatedProfileErrorSpread: est.spread,
-      reasons: check.reasons,
-      notes: [...rank.notes, est.note],
-      errorAlongRun: along,
-      runLength: run.length,
-      upstreamFitting: upFit.id,
-      downstreamFitting: downFit.id,
-    };
-  } else {
-    warnings.push({
-      code: "no-run",
-      message: "no straight run described: installation effects are not assessed",
-    });
-  }
+  const runStage = planStraightRun({
+    run: site.run,
+    bore,
+    relativeRoughness: rr,
+    points,
+    traverses: provisional.traverses,
+    fluidAngle: provisional.fluidAngle,
+  });
+  warnings.push(...runStage.warnings);
+  addTrace(runStage.trace);
+  const { straightRun, installHalf } = runStage;
 
   // --- uncertainty ---------------------------------------------------------------------
   const linThick = lining.reduce((s, l) => s + l.thickness, 0);
