@@ -13,30 +13,19 @@
 import { InputError, NoPhysicalAnswerError, type Warning } from "../errors.ts";
 import { trace as traceEntry, type TraceEntry } from "../trace.ts";
 import { defaultRegistry, type Registry } from "../registry/mod.ts";
-import { liquidProperties } from "../liquids/mod.ts";
-import {
-  type ClampOnInputs,
-  type ClampOnPath,
-  clampOnPath,
-  minimumResolvableVelocity,
-  type SearchWindow,
-  searchWindow,
-  signalBudget,
-  techniqueScreening,
-  transitTimes,
-  wallBorneSignal,
-} from "../acoustics/mod.ts";
+import { type ClampOnPath, type SearchWindow, techniqueScreening } from "../acoustics/mod.ts";
 import { gumPropagate, monteCarlo, type UncertainInput } from "../uncertainty/mod.ts";
 import { flowModel, MODEL_INPUTS } from "./model.ts";
 import type { SiteInput } from "./schema.ts";
 
 export { PLAN_ASSUMPTIONS } from "./stages/assumptions.ts";
-import { ASSUMPTION_TEXT, halfWidthTol, PLAN_ASSUMPTIONS } from "./stages/assumptions.ts";
+import { ASSUMPTION_TEXT, PLAN_ASSUMPTIONS } from "./stages/assumptions.ts";
 import { planPipe } from "./stages/pipe.ts";
 import { planLiquid } from "./stages/liquid.ts";
 import { planOperatingPoints } from "./stages/points.ts";
 import { planTransducer } from "./stages/transducer.ts";
 import { planStraightRun } from "./stages/run.ts";
+import { planMountings } from "./stages/mountings.ts";
 
 /** Options of {@link planSite}. */
 export interface PlanOptions {
@@ -326,13 +315,6 @@ export interface SitePlan {
   readonly warnings: readonly Warning[];
 }
 
-const MOUNTING_NAMES: Record<number, string> = { 1: "Z", 2: "V", 4: "W" };
-
-/** Name of a mounting by traverse count: Z, V, W, else `N-traverse`. */
-function mountingName(traverses: number): string {
-  return MOUNTING_NAMES[traverses] ?? `${traverses}-traverse`;
-}
-
 /**
  * Plan one site.
  *
@@ -418,119 +400,33 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
   addTrace(pointsStage.trace);
 
   // --- mountings -----------------------------------------------------------------------
-  const baseInputs = (n: number): ClampOnInputs => ({
-    outsideDiameter: rp.outsideDiameter,
+  const mStage = planMountings({
+    mountings: site.mountings,
+    rp,
     wallThickness,
-    wallSoundSpeed: wallL,
-    wallShearSpeed: wallS,
-    lining: lining.map((l) => ({ thickness: l.thickness, soundSpeed: l.soundSpeed })),
-    fluidSoundSpeed: c,
-    wedgeSoundSpeed: cw,
-    wedgeAngle: td.wedgeAngle,
-    traverses: n,
-    wedge: td.elementHeight !== undefined || td.indexOffset !== undefined
-      ? { elementHeight: td.elementHeight, indexOffset: td.indexOffset }
-      : undefined,
+    wallL,
+    wallS,
+    lining,
+    c,
+    cw,
+    td,
+    sp,
+    mat,
+    cSpread,
+    cwHalf,
+    dcwdT,
+    points,
+    timingOffset,
+    T,
+    fl,
+    rho,
+    wedgeDensity,
+    wedgeAtt,
+    reg,
   });
-  const wallTolHalf = sp.measuredWallThickness !== undefined
-    ? PLAN_ASSUMPTIONS.gaugeHalfWidth
-    : halfWidthTol(rp.tolerances?.wallThickness) ?? 0.125 * wallThickness / 2;
-  const odHalf = halfWidthTol(rp.tolerances?.outsideDiameter) ??
-    PLAN_ASSUMPTIONS.defaultOdRelative * rp.outsideDiameter;
-  const budgetWarnings: Warning[] = [];
-  const mountingPlans: (MountingPlan & { path: ClampOnPath; inputs: ClampOnInputs })[] = [];
-  for (const n of site.mountings) {
-    const inputs = baseInputs(n);
-    const path = clampOnPath(inputs);
-    const win = searchWindow(inputs, {
-      fluidSoundSpeed: cSpread,
-      wallThickness: wallTolHalf,
-      wallSoundSpeed: sp.wallSoundSpeed !== undefined ? 0 : mat.longitudinalSpread ?? 0,
-      wallShearSpeed: sp.wallShearSpeed !== undefined ? 0 : mat.shearSpread ?? 0,
-      wedgeSoundSpeed: cwHalf,
-      wedgeAngle: PLAN_ASSUMPTIONS.wedgeAngleHalfWidth,
-      ...(lining.length
-        ? { liningThickness: PLAN_ASSUMPTIONS.liningThicknessRelative * lining[0].thickness }
-        : {}),
-      ...(dcwdT !== 0
-        ? {
-          wedgeTemperature: {
-            uncertainty: PLAN_ASSUMPTIONS.wedgeTemperatureHalfWidth,
-            dSoundSpeedDT: dcwdT,
-          },
-        }
-        : {}),
-    });
-    const times = points.map((p) => {
-      const t = transitTimes(path, p.pathVelocity);
-      return { label: p.label, upstream: t.upstream, downstream: t.downstream, deltaT: t.deltaT };
-    });
-    const dtMin = Math.abs(times[0].deltaT);
-    const vmin = minimumResolvableVelocity(path, timingOffset);
-    const wb = wallBorneSignal(path, { frequency: td.frequency });
-    const budget = signalBudget(path, {
-      frequency: td.frequency,
-      temperature: T,
-      pressure: fl.pressure,
-      liquid: { density: rho },
-      wedge: { density: wedgeDensity, attenuation: wedgeAtt },
-      wall: { density: mat.density, attenuation: mat.attenuation },
-      lining: lining.map((l) => {
-        const lm = reg.material(l.material);
-        return { density: lm.density, attenuation: lm.attenuation };
-      }),
-    }, { extrapolate: true, warnings: budgetWarnings });
-    let overTemperature: NonNullable<MountingPlan["overTemperature"]>[number][] | undefined;
-    if (fl.temperatureRange) {
-      const { min, max } = fl.temperatureRange;
-      overTemperature = [];
-      for (let i = 0; i <= 6; i++) {
-        const Ti = min + (max - min) * i / 6;
-        const ci = fl.soundSpeed ?? liquidProperties(fl.liquid, Ti, fl.pressure, {
-          salinity: fl.salinity,
-          formulation: fl.formulation,
-          extrapolate: true,
-          warnings: [],
-        }).soundSpeed;
-        const cwi = cw + dcwdT * (Ti - T);
-        const pi = clampOnPath({ ...inputs, fluidSoundSpeed: ci, wedgeSoundSpeed: cwi });
-        overTemperature.push({
-          temperature: Ti,
-          spacing: pi.spacing,
-          fluidSoundSpeed: ci,
-          totalTime: pi.totalTime,
-        });
-      }
-    }
-    mountingPlans.push({
-      traverses: n,
-      name: mountingName(n),
-      spacing: path.spacing,
-      referenceMarkDistance: path.referenceMarkDistance,
-      fluidAngle: path.fluidAngle,
-      wallAngle: path.wallAngle,
-      liningAngles: path.liningAngles,
-      wallMode: path.wallMode,
-      modes: path.modes,
-      fluidPathLength: path.fluidPathLength,
-      fluidTime: path.fluidTime,
-      wallTime: path.wallTime,
-      liningTime: path.liningTime,
-      totalTime: path.totalTime,
-      searchWindow: win,
-      times,
-      minimumResolvableVelocity: vmin,
-      offsetFraction: timingOffset / dtMin,
-      resolvableAtMinimum: dtMin >= PLAN_ASSUMPTIONS.resolvableMultiple * timingOffset,
-      wallBorne: { separation: wb.separation, overlaps: wb.overlaps },
-      signal: { totalDb: budget.totalDb, rating: budget.rating },
-      overTemperature,
-      expandedByPoint: [],
-      path,
-      inputs,
-    });
-    if (n === site.mountings[0]) addTrace(budget.trace);
-  }
+  addTrace(mStage.trace);
+  const { mountingPlans, wallTolHalf, odHalf } = mStage;
+  const budgetWarnings = mStage.warnings;
   for (const w of budgetWarnings) {
     if (!warnings.some((x) => x.message === w.message)) warnings.push(w);
   }

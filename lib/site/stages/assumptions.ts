@@ -85,3 +85,20 @@ export function halfWidthTol(
 export function fmtMm(x: number): string {
   return `${Number((x * 1000).toPrecision(4))} mm`;
 }
+
+const MOUNTING_NAMES: Record<number, string> = { 1: "Z", 2: "V", 4: "W" };
+
+/**
+ * Name of a mounting by traverse count: Z, V, W (trade terms), else `N-traverse`.
+ *
+ * @param traverses traverse count
+ * @returns the name
+ * @example
+ * ```ts
+ * import { mountingName } from "./assumptions.ts";
+ * if (mountingName(2) !== "V" || mountingName(3) !== "3-traverse") throw new Error();
+ * ```
+ */
+export function mountingName(traverses: number): string {
+  return MOUNTING_NAMES[traverses] ?? `${traverses}-traverse`;
+}
