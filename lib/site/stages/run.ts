@@ -100,30 +100,24 @@ export function planStraightRun(input: RunStageInput): RunStage {
       downstream: { fitting: downFit.id, distance: run.length - position },
     });
     addTrace(check.trace);
-    const est = profileErrorEstimate({
-      distanceDiameters: position / bore,
-      fitting: upFit.id,
-      orientation,
-      traverses: provisional.traverses,
-      reynolds: designPoint.reynolds,
-      fluidAngle: provisional.fluidAngle,
-      relativeRoughness: rr,
-    });
+    const estAt = (x: number) =>
+      profileErrorEstimate({
+        distanceDiameters: x / bore,
+        fitting: upFit.id,
+        orientation,
+        traverses: provisional.traverses,
+        reynolds: designPoint.reynolds,
+        fluidAngle: provisional.fluidAngle,
+        relativeRoughness: rr,
+      });
+    const est = estAt(position);
     installHalf = Math.abs(est.error) + est.spread;
     const along: { position: number; error: number }[] = [];
     for (let i = 0; i <= 40; i++) {
       const x = run.length * i / 40;
       along.push({
         position: x,
-        error: profileErrorEstimate({
-          distanceDiameters: x / bore,
-          fitting: upFit.id,
-          orientation,
-          traverses: provisional.traverses,
-          reynolds: designPoint.reynolds,
-          fluidAngle: provisional.fluidAngle,
-          relativeRoughness: rr,
-        }).error,
+        error: estAt(x).error,
       });
     }
     tr.push(
