@@ -219,3 +219,20 @@ Deno.test("shared helpers: tolerance half-width, mm text, mounting names (trade 
   assert.equal(fmtMm(0.2191), "219.1 mm");
   assert.deepEqual([1, 2, 4].map(mountingName), ["Z", "V", "W"]);
 });
+
+Deno.test("transducer stage: a wedge outside its material's temperature range is warned", () => {
+  const wm = reg.material("acrylic");
+  assert.ok(wm.temperatureRange, "acrylic has a stated coefficient range in the registry");
+  const [lo, hi] = wm.temperatureRange!;
+  const at = (T: number) =>
+    planTransducer(
+      {
+        transducer: { wedgeMaterial: "acrylic", wedgeAngle: 0.6, frequency: 1e6 },
+        temperature: T,
+        registry: reg,
+      } as unknown as Parameters<typeof planTransducer>[0],
+    ).warnings.some((w) => w.code === "wedge-range");
+  assert.equal(at((lo + hi) / 2), false, "inside the range: no warning");
+  assert.equal(at(hi + 5), true, "above the range: warned");
+  assert.equal(at(lo - 5), true, "below the range: warned");
+});

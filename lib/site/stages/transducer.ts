@@ -4,7 +4,8 @@
  * offset of the electronics.
  *
  * Method: c_w(T) = c_w,ref + dc/dT·(T − T_ref) for a registry wedge material; a stated wedge
- * speed is used as given.
+ * speed is used as given. A line temperature outside the material's stated coefficient range
+ * raises a `wedge-range` warning (issue 11 item 1).
  *
  * @module
  */
@@ -87,6 +88,16 @@ export function planTransducer(input: TransducerStageInput): TransducerStage {
     wedgeDensity = wm.density;
     wedgeAtt = wm.attenuation;
     dcwdT = td.wedgeTemperatureCoefficient ?? wm.dLongitudinalDT ?? 0;
+    const range = wm.temperatureRange;
+    if (range && (T < range[0] || T > range[1])) {
+      const degC = (k: number) => `${Number((k - 273.15).toFixed(1))} °C`;
+      warnings.push({
+        code: "wedge-range",
+        message: `line temperature ${degC(T)} is outside the ${degC(range[0])} to ` +
+          `${degC(range[1])} range of the ${td.wedgeMaterial} wedge data: its sound speed is ` +
+          "extrapolated and the wedge may soften or wear",
+      });
+    }
     cw = td.wedgeSoundSpeed ?? wm.longitudinal + dcwdT * (T - wm.referenceTemperature);
     cwHalf = td.wedgeSoundSpeed !== undefined
       ? PLAN_ASSUMPTIONS.statedWedgeSpeedRelative * cw
