@@ -236,3 +236,29 @@ Deno.test("transducer stage: a wedge outside its material's temperature range is
   assert.equal(at(hi + 5), true, "above the range: warned");
   assert.equal(at(lo - 5), true, "below the range: warned");
 });
+
+Deno.test("transducer stage: a stated wedge speed is corrected by dc/dT × (T − T_ref)", async () => {
+  const hot = BASE.replace("temperature: 20 degC", "temperature: 50 degC").replace(
+    "wedgeSoundSpeed: 2720 m/s,",
+    "wedgeSoundSpeed: 2720 m/s, wedgeTemperatureCoefficient: -2.5 m/s/K, wedgeReferenceTemperature: 20 degC,",
+  );
+  const site = await readSiteText(hot);
+  closeAbs(site.transducer.wedgeReferenceTemperature!, 293.15, 1e-9);
+  const s = planTransducer({
+    transducer: site.transducer,
+    temperature: site.fluid.temperature,
+    registry: reg,
+  });
+  // linear correction (definition of the coefficient): −2.5 m/s/K × 30 K = −75 m/s
+  closeAbs(s.cw - 2720, -2.5 * 30, 1e-9);
+  // without a reference: the stated speed holds at the line temperature, recorded as a default
+  const noRef = planTransducer({
+    transducer: { ...site.transducer, wedgeReferenceTemperature: undefined },
+    temperature: site.fluid.temperature,
+    registry: reg,
+  });
+  assert.equal(noRef.cw, 2720);
+  assert.ok(
+    noRef.warnings.some((w) => w.code === "default" && /reference temperature/.test(w.message)),
+  );
+});

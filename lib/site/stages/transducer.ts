@@ -4,7 +4,9 @@
  * offset of the electronics.
  *
  * Method: c_w(T) = c_w,ref + dc/dT·(T − T_ref) for a registry wedge material; a stated wedge
- * speed is used as given. A line temperature outside the material's stated coefficient range
+ * speed holds at `wedgeReferenceTemperature` and is corrected by dc/dT·(T − T_ref); without a
+ * reference it is taken at the line temperature (a `default` warning says so when a coefficient
+ * would apply). A line temperature outside the material's stated coefficient range
  * raises a `wedge-range` warning (issue 11 item 1).
  *
  * @module
@@ -77,6 +79,32 @@ export function planTransducer(input: TransducerStageInput): TransducerStage {
   const addTrace = (entries: readonly TraceEntry[] | undefined) => {
     if (entries) { for (const e of entries) tr.push(e); }
   };
+  // a stated wedge speed holds at wedgeReferenceTemperature (default: the line temperature)
+  const statedAtLine = (stated: number, k: number): number => {
+    const ref = td.wedgeReferenceTemperature;
+    if (ref === undefined) {
+      if (k !== 0) {
+        warnings.push({
+          code: "default",
+          message: "no wedge reference temperature stated: the stated wedge sound speed is " +
+            "taken to hold at the line temperature",
+        });
+      }
+      return stated;
+    }
+    const corrected = stated + k * (T - ref);
+    tr.push(
+      traceEntry("wedge reference temperature (site)", ref, "K", "site", "input"),
+      traceEntry(
+        "wedge sound speed corrected to the line temperature",
+        corrected,
+        "m/s",
+        "site",
+        "computed",
+      ),
+    );
+    return corrected;
+  };
   let cw: number;
   let dcwdT: number;
   let cwHalf: number;
@@ -98,7 +126,9 @@ export function planTransducer(input: TransducerStageInput): TransducerStage {
           "extrapolated and the wedge may soften or wear",
       });
     }
-    cw = td.wedgeSoundSpeed ?? wm.longitudinal + dcwdT * (T - wm.referenceTemperature);
+    cw = td.wedgeSoundSpeed !== undefined
+      ? statedAtLine(td.wedgeSoundSpeed, dcwdT)
+      : wm.longitudinal + dcwdT * (T - wm.referenceTemperature);
     cwHalf = td.wedgeSoundSpeed !== undefined
       ? PLAN_ASSUMPTIONS.statedWedgeSpeedRelative * cw
       : wm.longitudinalSpread ?? PLAN_ASSUMPTIONS.statedWedgeSpeedRelative * cw;
@@ -108,8 +138,8 @@ export function planTransducer(input: TransducerStageInput): TransducerStage {
       );
     }
   } else if (td.wedgeSoundSpeed !== undefined) {
-    cw = td.wedgeSoundSpeed;
     dcwdT = td.wedgeTemperatureCoefficient ?? 0;
+    cw = statedAtLine(td.wedgeSoundSpeed, dcwdT);
     cwHalf = PLAN_ASSUMPTIONS.statedWedgeSpeedRelative * cw;
     tr.push(traceEntry("wedge sound speed (site)", cw, "m/s", "site", "input"));
     if (td.wedgeTemperatureCoefficient === undefined) {
