@@ -13,76 +13,19 @@
 import { InputError, NoPhysicalAnswerError, type Warning } from "../errors.ts";
 import { trace as traceEntry, type TraceEntry } from "../trace.ts";
 import { defaultRegistry, type Registry } from "../registry/mod.ts";
-import { pipe as resolvePipe, type PipeSpec, type ResolvedPipe } from "../pipe/mod.ts";
-import { liquidProperties, type LiquidState } from "../liquids/mod.ts";
-import {
-  type ClampOnInputs,
-  type ClampOnPath,
-  clampOnPath,
-  minimumResolvableVelocity,
-  type SearchWindow,
-  searchWindow,
-  signalBudget,
-  techniqueScreening,
-  transitTimes,
-  wallBorneSignal,
-} from "../acoustics/mod.ts";
-import { frictionFactor, profileFactorEstimate, reynoldsNumber } from "../flow/mod.ts";
-import {
-  checkStraightRun,
-  profileErrorEstimate,
-  rankPositions,
-  resolveFitting,
-} from "../installation/mod.ts";
+import { type ClampOnPath, type SearchWindow, techniqueScreening } from "../acoustics/mod.ts";
 import { gumPropagate, monteCarlo, type UncertainInput } from "../uncertainty/mod.ts";
 import { flowModel, MODEL_INPUTS } from "./model.ts";
 import type { SiteInput } from "./schema.ts";
 
-/** Assumptions of the plan that no site file states: each is common practice or recalled. */
-export const PLAN_ASSUMPTIONS = {
-  /** Half-width of the wedge-angle uncertainty (machining and mounting), rad. */
-  wedgeAngleHalfWidth: 0.2 * Math.PI / 180,
-  /** Half-width of the wedge temperature's departure from the liquid's, K. */
-  wedgeTemperatureHalfWidth: 2,
-  /** Relative half-width of a wedge sound speed stated without a material, dimensionless. */
-  statedWedgeSpeedRelative: 0.003,
-  /** Relative half-width of a lining's thickness (linings are uneven), dimensionless. */
-  liningThicknessRelative: 0.2,
-  /** Relative half-width of a lining's sound speed when only its material is known. */
-  liningSpeedRelative: 0.05,
-  /** Half-width of a thickness-gauge reading, m. */
-  gaugeHalfWidth: 0.1e-3,
-  /** Half-width of a circumference taped round the pipe, m. */
-  tapeHalfWidth: 1e-3,
-  /** Half-width of an outside diameter measured with a caliper, m. */
-  caliperHalfWidth: 0.5e-3,
-  /** Half-width of the fixed delay (electronics, cables, couplant) after zero setting, s. */
-  fixedDelayHalfWidth: 50e-9,
-  /** Timing resolution assumed when the site states none, s. */
-  defaultTimingResolution: 100e-12,
-  /** Δt at minimum flow must exceed this multiple of the timing offset to count resolvable. */
-  resolvableMultiple: 100,
-  /** Outside-diameter half-width when the catalogue gives no tolerance, relative. */
-  defaultOdRelative: 0.005,
-} as const;
-
-const ASSUMPTION_TEXT: Record<keyof typeof PLAN_ASSUMPTIONS, [string, string]> = {
-  wedgeAngleHalfWidth: ["wedge angle uncertainty, half-width", "rad"],
-  wedgeTemperatureHalfWidth: ["wedge temperature departure from the liquid's, half-width", "K"],
-  statedWedgeSpeedRelative: ["stated wedge sound speed, relative half-width", ""],
-  liningThicknessRelative: ["lining thickness, relative half-width", ""],
-  liningSpeedRelative: ["lining sound speed from its material, relative half-width", ""],
-  gaugeHalfWidth: ["thickness-gauge reading, half-width", "m"],
-  tapeHalfWidth: ["circumference taped round the pipe, half-width", "m"],
-  caliperHalfWidth: ["outside diameter by caliper, half-width", "m"],
-  fixedDelayHalfWidth: ["fixed delay after zero setting, half-width", "s"],
-  defaultTimingResolution: ["timing resolution when none is stated", "s"],
-  resolvableMultiple: [
-    "Δt at minimum flow over timing offset, least ratio to count resolvable",
-    "",
-  ],
-  defaultOdRelative: ["outside diameter, relative half-width when no tolerance is known", ""],
-};
+export { PLAN_ASSUMPTIONS } from "./stages/assumptions.ts";
+import { ASSUMPTION_TEXT, PLAN_ASSUMPTIONS } from "./stages/assumptions.ts";
+import { planPipe } from "./stages/pipe.ts";
+import { planLiquid } from "./stages/liquid.ts";
+import { planOperatingPoints } from "./stages/points.ts";
+import { planTransducer } from "./stages/transducer.ts";
+import { planStraightRun } from "./stages/run.ts";
+import { planMountings } from "./stages/mountings.ts";
 
 /** Options of {@link planSite}. */
 export interface PlanOptions {
@@ -372,20 +315,6 @@ export interface SitePlan {
   readonly warnings: readonly Warning[];
 }
 
-const MOUNTING_NAMES: Record<number, string> = { 1: "Z", 2: "V", 4: "W" };
-
-/** Name of a mounting by traverse count: Z, V, W, else `N-traverse`. */
-function mountingName(traverses: number): string {
-  return MOUNTING_NAMES[traverses] ?? `${traverses}-traverse`;
-}
-
-function halfWidthTol(t: { plus?: number; minus?: number } | undefined): number | undefined {
-  if (!t) return undefined;
-  const p = t.plus ?? 0, m = t.minus ?? 0;
-  const h = (Math.abs(p) + Math.abs(m)) / 2;
-  return h > 0 ? h : undefined;
-}
-
 /**
  * Plan one site.
  *
@@ -427,181 +356,27 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
 
   // --- pipe --------------------------------------------------------------------------
   const sp = site.pipe;
-  const liningIn = sp.lining
-    ? [{ material: sp.lining.material, thickness: sp.lining.thickness }]
-    : undefined;
-  let spec: PipeSpec;
-  if (sp.geometry === "measured") {
-    if (!sp.material) {
-      throw new InputError("pipe.material", "nothing", "a material id for a measured pipe");
-    }
-    spec = {
-      outsideDiameter: sp.outsideDiameter,
-      circumference: sp.circumference,
-      wallThickness: sp.wallThickness!,
-      material: sp.material,
-      lining: liningIn,
-      uncertainty: {
-        outsideDiameter: sp.outsideDiameter !== undefined
-          ? PLAN_ASSUMPTIONS.caliperHalfWidth
-          : undefined,
-        circumference: sp.circumference !== undefined ? PLAN_ASSUMPTIONS.tapeHalfWidth : undefined,
-        wallThickness: PLAN_ASSUMPTIONS.gaugeHalfWidth,
-      },
-    };
-  } else {
-    spec = {
-      standard: sp.standard!,
-      nps: sp.nps!,
-      schedule: sp.schedule!,
-      material: sp.material,
-      lining: liningIn,
-    };
-  }
-  const pipeWarnings: Warning[] = [];
-  const rp: ResolvedPipe = resolvePipe(spec, { registry: reg, warnings: pipeWarnings });
-  warnings.push(...pipeWarnings);
-  addTrace(rp.trace);
-  const materialId = sp.material ?? rp.material;
-  const mat = reg.material(materialId);
-  addTrace(mat.trace);
+  const pipeStage = planPipe({ pipe: sp, registry: reg });
+  warnings.push(...pipeStage.warnings);
+  addTrace(pipeStage.trace);
+  const { rp, mat, materialId, wallL, wallS, wallThickness, lining, insideDiameter, bore, area } =
+    pipeStage;
   const T = site.fluid.temperature;
-  const wallL = sp.wallSoundSpeed ?? mat.longitudinal;
-  const wallS = sp.wallShearSpeed ?? mat.shear;
-  if (sp.wallSoundSpeed !== undefined) {
-    tr.push(
-      traceEntry("wall longitudinal sound speed (site override)", wallL, "m/s", "site", "input"),
-    );
-  }
-  if (sp.wallShearSpeed !== undefined) {
-    tr.push(traceEntry("wall shear sound speed (site override)", wallS!, "m/s", "site", "input"));
-  }
-  let wallThickness = rp.wallThickness;
-  if (sp.measuredWallThickness !== undefined) {
-    const tolerance = halfWidthTol(rp.tolerances?.wallThickness);
-    const diff = sp.measuredWallThickness - rp.wallThickness;
-    if (tolerance !== undefined && Math.abs(diff) > tolerance) {
-      warnings.push({
-        code: "wall-differs",
-        message: `measured wall ${fmtMm(sp.measuredWallThickness)} differs from the nominal ` +
-          `${fmtMm(rp.wallThickness)} by more than its tolerance: the measured value is used`,
-      });
-    }
-    wallThickness = sp.measuredWallThickness;
-    tr.push(
-      traceEntry(
-        "wall thickness (thickness-gauge reading)",
-        wallThickness,
-        "m",
-        "site",
-        "measured",
-      ),
-    );
-  }
-  if (!(wallThickness < rp.outsideDiameter / 2)) {
-    throw new InputError(
-      "pipe.measuredWallThickness",
-      fmtMm(wallThickness),
-      "less than the outside radius",
-    );
-  }
-  const lining = rp.lining.map((l, i) => {
-    const override = i === 0 ? sp.lining?.soundSpeed : undefined;
-    let c = override;
-    if (c === undefined) {
-      const lm = reg.material(l.material);
-      addTrace(lm.trace);
-      c = lm.longitudinal;
-    } else tr.push(traceEntry("lining sound speed (site override)", c, "m/s", "site", "input"));
-    return {
-      material: l.material,
-      thickness: l.thickness,
-      soundSpeed: c,
-      overridden: override !== undefined,
-    };
-  });
-  const insideDiameter = rp.outsideDiameter - 2 * wallThickness;
-  const bore = insideDiameter - 2 * lining.reduce((s, l) => s + l.thickness, 0);
-  if (!(bore > 0)) {
-    throw new InputError(
-      "pipe.lining.thickness",
-      fmtMm(lining[0]?.thickness ?? 0),
-      "a lining thinner than the inside radius",
-    );
-  }
-  const area = Math.PI / 4 * bore * bore;
 
   // --- fluid ---------------------------------------------------------------------------
   const fl = site.fluid;
-  const liqWarnings: Warning[] = [];
-  const liq: LiquidState = liquidProperties(fl.liquid, T, fl.pressure, {
-    salinity: fl.salinity,
-    formulation: fl.formulation,
-    warnings: liqWarnings,
-  });
-  warnings.push(...liqWarnings);
-  addTrace(liq.trace);
-  const c = fl.soundSpeed ?? liq.soundSpeed;
-  const rho = fl.density ?? liq.density;
-  const nu = fl.kinematicViscosity ?? liq.kinematicViscosity;
-  if (fl.soundSpeed !== undefined) {
-    tr.push(traceEntry("liquid sound speed (site override)", c, "m/s", "site", "input"));
-  }
-  if (fl.density !== undefined) {
-    tr.push(traceEntry("liquid density (site override)", rho, "kg/m^3", "site", "input"));
-  }
-  if (fl.kinematicViscosity !== undefined) {
-    tr.push(traceEntry("liquid kinematic viscosity (site override)", nu, "m^2/s", "site", "input"));
-  }
-  const cSpread = fl.soundSpeed !== undefined ? 0 : liq.soundSpeedSpread;
+  const liquidStage = planLiquid({ fluid: fl });
+  warnings.push(...liquidStage.warnings);
+  addTrace(liquidStage.trace);
+  const { liq, c, rho, nu, cSpread } = liquidStage;
 
   // --- transducer ----------------------------------------------------------------------
   const td = site.transducer;
-  let cw: number;
-  let dcwdT: number;
-  let cwHalf: number;
-  let wedgeDensity = 1180;
-  let wedgeAtt: { value: number; frequency: number } | undefined;
-  if (td.wedgeMaterial) {
-    const wm = reg.material(td.wedgeMaterial);
-    addTrace(wm.trace);
-    wedgeDensity = wm.density;
-    wedgeAtt = wm.attenuation;
-    dcwdT = td.wedgeTemperatureCoefficient ?? wm.dLongitudinalDT ?? 0;
-    cw = td.wedgeSoundSpeed ?? wm.longitudinal + dcwdT * (T - wm.referenceTemperature);
-    cwHalf = td.wedgeSoundSpeed !== undefined
-      ? PLAN_ASSUMPTIONS.statedWedgeSpeedRelative * cw
-      : wm.longitudinalSpread ?? PLAN_ASSUMPTIONS.statedWedgeSpeedRelative * cw;
-    if (td.wedgeSoundSpeed === undefined && dcwdT !== 0) {
-      tr.push(
-        traceEntry("wedge sound speed at the liquid temperature", cw, "m/s", wm.source, "computed"),
-      );
-    }
-  } else if (td.wedgeSoundSpeed !== undefined) {
-    cw = td.wedgeSoundSpeed;
-    dcwdT = td.wedgeTemperatureCoefficient ?? 0;
-    cwHalf = PLAN_ASSUMPTIONS.statedWedgeSpeedRelative * cw;
-    tr.push(traceEntry("wedge sound speed (site)", cw, "m/s", "site", "input"));
-    if (td.wedgeTemperatureCoefficient === undefined) {
-      warnings.push({
-        code: "wedge-temperature",
-        message: "no wedge material or temperature coefficient: the wedge speed is held constant " +
-          "over temperature",
-      });
-    }
-  } else {
-    throw new InputError("transducer", "neither wedgeSoundSpeed nor wedgeMaterial", "one of them");
-  }
-  tr.push(traceEntry("wedge angle (site)", td.wedgeAngle, "rad", "site", "input"));
-  const timingResolution = td.timingResolution ?? PLAN_ASSUMPTIONS.defaultTimingResolution;
-  if (td.timingResolution === undefined) {
-    warnings.push({
-      code: "default",
-      message: `no timing resolution stated: ${timingResolution * 1e12} ps assumed`,
-    });
-  }
-  const zeroOffset = Math.abs(td.zeroOffset ?? timingResolution);
-  const timingOffset = Math.max(zeroOffset, timingResolution);
+  const tdStage = planTransducer({ transducer: td, temperature: T, registry: reg });
+  warnings.push(...tdStage.warnings);
+  addTrace(tdStage.trace);
+  const { cw, dcwdT, cwHalf, wedgeDensity, wedgeAtt, timingResolution, zeroOffset, timingOffset } =
+    tdStage;
 
   for (const [k, v] of Object.entries(PLAN_ASSUMPTIONS)) {
     const [text, unit] = ASSUMPTION_TEXT[k as keyof typeof PLAN_ASSUMPTIONS];
@@ -617,258 +392,59 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
     });
   }
   const rr = roughness / bore;
-  const flows: { label: OperatingPoint["label"]; q: number }[] = [];
-  const toFlow = (x: number) => site.flow.quantity === "velocity" ? x * area : x;
-  flows.push({ label: "minimum", q: toFlow(site.flow.minimum) });
-  if (site.flow.design !== undefined) flows.push({ label: "design", q: toFlow(site.flow.design) });
-  flows.push({ label: "maximum", q: toFlow(site.flow.maximum) });
-  const flowWarnings: Warning[] = [];
-  const points: OperatingPoint[] = flows.map(({ label, q }) => {
-    const V = q / area;
-    const re = reynoldsNumber(V, bore, nu);
-    const est = profileFactorEstimate(re, {
-      relativeRoughness: rr,
-      extrapolate: true,
-      warnings: flowWarnings,
-    });
-    const f = frictionFactor(re, rr, "colebrook", { extrapolate: true, warnings: flowWarnings });
-    return {
-      label,
-      flowRate: q,
-      meanVelocity: V,
-      reynolds: re,
-      regime: est.regime,
-      profileFactor: est.factor,
-      profileFactorSpread: est.spread,
-      pathVelocity: V / est.factor,
-      frictionFactor: f,
-    };
-  });
-  for (const w of flowWarnings) {
+  const pointsStage = planOperatingPoints({ flow: site.flow, bore, area, roughness, nu });
+  const { points, profileFactorChange } = pointsStage;
+  for (const w of pointsStage.warnings) {
     if (!warnings.some((x) => x.message === w.message)) warnings.push(w);
   }
-  const kValues = points.map((p) => p.profileFactor);
-  const profileFactorChange = (Math.max(...kValues) - Math.min(...kValues)) /
-    ((Math.max(...kValues) + Math.min(...kValues)) / 2);
-  tr.push(
-    traceEntry(
-      "formulation: profile factor (power law, Nikuradse n; spread over models)",
-      "lib/flow",
-      "",
-      "common-practice",
-      "computed",
-    ),
-  );
+  addTrace(pointsStage.trace);
 
   // --- mountings -----------------------------------------------------------------------
-  const baseInputs = (n: number): ClampOnInputs => ({
-    outsideDiameter: rp.outsideDiameter,
+  const mStage = planMountings({
+    mountings: site.mountings,
+    rp,
     wallThickness,
-    wallSoundSpeed: wallL,
-    wallShearSpeed: wallS,
-    lining: lining.map((l) => ({ thickness: l.thickness, soundSpeed: l.soundSpeed })),
-    fluidSoundSpeed: c,
-    wedgeSoundSpeed: cw,
-    wedgeAngle: td.wedgeAngle,
-    traverses: n,
-    wedge: td.elementHeight !== undefined || td.indexOffset !== undefined
-      ? { elementHeight: td.elementHeight, indexOffset: td.indexOffset }
-      : undefined,
+    wallL,
+    wallS,
+    lining,
+    c,
+    cw,
+    td,
+    sp,
+    mat,
+    cSpread,
+    cwHalf,
+    dcwdT,
+    points,
+    timingOffset,
+    T,
+    fl,
+    rho,
+    wedgeDensity,
+    wedgeAtt,
+    reg,
   });
-  const wallTolHalf = sp.measuredWallThickness !== undefined
-    ? PLAN_ASSUMPTIONS.gaugeHalfWidth
-    : halfWidthTol(rp.tolerances?.wallThickness) ?? 0.125 * wallThickness / 2;
-  const odHalf = halfWidthTol(rp.tolerances?.outsideDiameter) ??
-    PLAN_ASSUMPTIONS.defaultOdRelative * rp.outsideDiameter;
-  const budgetWarnings: Warning[] = [];
-  const mountingPlans: (MountingPlan & { path: ClampOnPath; inputs: ClampOnInputs })[] = [];
-  for (const n of site.mountings) {
-    const inputs = baseInputs(n);
-    const path = clampOnPath(inputs);
-    const win = searchWindow(inputs, {
-      fluidSoundSpeed: cSpread,
-      wallThickness: wallTolHalf,
-      wallSoundSpeed: sp.wallSoundSpeed !== undefined ? 0 : mat.longitudinalSpread ?? 0,
-      wallShearSpeed: sp.wallShearSpeed !== undefined ? 0 : mat.shearSpread ?? 0,
-      wedgeSoundSpeed: cwHalf,
-      wedgeAngle: PLAN_ASSUMPTIONS.wedgeAngleHalfWidth,
-      ...(lining.length
-        ? { liningThickness: PLAN_ASSUMPTIONS.liningThicknessRelative * lining[0].thickness }
-        : {}),
-      ...(dcwdT !== 0
-        ? {
-          wedgeTemperature: {
-            uncertainty: PLAN_ASSUMPTIONS.wedgeTemperatureHalfWidth,
-            dSoundSpeedDT: dcwdT,
-          },
-        }
-        : {}),
-    });
-    const times = points.map((p) => {
-      const t = transitTimes(path, p.pathVelocity);
-      return { label: p.label, upstream: t.upstream, downstream: t.downstream, deltaT: t.deltaT };
-    });
-    const dtMin = Math.abs(times[0].deltaT);
-    const vmin = minimumResolvableVelocity(path, timingOffset);
-    const wb = wallBorneSignal(path, { frequency: td.frequency });
-    const budget = signalBudget(path, {
-      frequency: td.frequency,
-      temperature: T,
-      pressure: fl.pressure,
-      liquid: { density: rho },
-      wedge: { density: wedgeDensity, attenuation: wedgeAtt },
-      wall: { density: mat.density, attenuation: mat.attenuation },
-      lining: lining.map((l) => {
-        const lm = reg.material(l.material);
-        return { density: lm.density, attenuation: lm.attenuation };
-      }),
-    }, { extrapolate: true, warnings: budgetWarnings });
-    let overTemperature: NonNullable<MountingPlan["overTemperature"]>[number][] | undefined;
-    if (fl.temperatureRange) {
-      const { min, max } = fl.temperatureRange;
-      overTemperature = [];
-      for (let i = 0; i <= 6; i++) {
-        const Ti = min + (max - min) * i / 6;
-        const ci = fl.soundSpeed ?? liquidProperties(fl.liquid, Ti, fl.pressure, {
-          salinity: fl.salinity,
-          formulation: fl.formulation,
-          extrapolate: true,
-          warnings: [],
-        }).soundSpeed;
-        const cwi = cw + dcwdT * (Ti - T);
-        const pi = clampOnPath({ ...inputs, fluidSoundSpeed: ci, wedgeSoundSpeed: cwi });
-        overTemperature.push({
-          temperature: Ti,
-          spacing: pi.spacing,
-          fluidSoundSpeed: ci,
-          totalTime: pi.totalTime,
-        });
-      }
-    }
-    mountingPlans.push({
-      traverses: n,
-      name: mountingName(n),
-      spacing: path.spacing,
-      referenceMarkDistance: path.referenceMarkDistance,
-      fluidAngle: path.fluidAngle,
-      wallAngle: path.wallAngle,
-      liningAngles: path.liningAngles,
-      wallMode: path.wallMode,
-      modes: path.modes,
-      fluidPathLength: path.fluidPathLength,
-      fluidTime: path.fluidTime,
-      wallTime: path.wallTime,
-      liningTime: path.liningTime,
-      totalTime: path.totalTime,
-      searchWindow: win,
-      times,
-      minimumResolvableVelocity: vmin,
-      offsetFraction: timingOffset / dtMin,
-      resolvableAtMinimum: dtMin >= PLAN_ASSUMPTIONS.resolvableMultiple * timingOffset,
-      wallBorne: { separation: wb.separation, overlaps: wb.overlaps },
-      signal: { totalDb: budget.totalDb, rating: budget.rating },
-      overTemperature,
-      expandedByPoint: [],
-      path,
-      inputs,
-    });
-    if (n === site.mountings[0]) addTrace(budget.trace);
-  }
+  addTrace(mStage.trace);
+  const { mountingPlans, wallTolHalf, odHalf } = mStage;
+  const budgetWarnings = mStage.warnings;
   for (const w of budgetWarnings) {
     if (!warnings.some((x) => x.message === w.message)) warnings.push(w);
   }
 
   // --- straight run --------------------------------------------------------------------
-  let straightRun: SitePlan["straightRun"];
-  let installHalf = 0;
-  const reList = points.map((p) => p.reynolds);
-  const designPoint = points.find((p) => p.label === "design") ?? points[points.length - 1];
   // the mounting the run is ranked for: the first usable one by the rule below (V by default)
   const provisional = chooseMounting(mountingPlans);
-  if (site.run) {
-    const run = site.run;
-    const upFit = resolveFitting(run.upstream.fitting);
-    const downFit = resolveFitting(run.downstream.fitting);
-    const rank = rankPositions({
-      runLength: run.length,
-      diameter: bore,
-      upstream: { fitting: upFit.id, orientation: run.upstream.orientation },
-      downstream: { fitting: downFit.id },
-      traverses: provisional.traverses,
-      reynolds: reList,
-      fluidAngle: provisional.fluidAngle,
-    });
-    const position = run.plannedPosition ?? rank.recommendedPosition;
-    const orientation = run.plannedPosition !== undefined
-      ? run.upstream.orientation ?? 0
-      : rank.recommendedOrientation;
-    const check = checkStraightRun({
-      diameter: bore,
-      upstream: { fitting: upFit.id, distance: position },
-      downstream: { fitting: downFit.id, distance: run.length - position },
-    });
-    addTrace(check.trace);
-    const est = profileErrorEstimate({
-      distanceDiameters: position / bore,
-      fitting: upFit.id,
-      orientation,
-      traverses: provisional.traverses,
-      reynolds: designPoint.reynolds,
-      fluidAngle: provisional.fluidAngle,
-      relativeRoughness: rr,
-    });
-    installHalf = Math.abs(est.error) + est.spread;
-    const along: { position: number; error: number }[] = [];
-    for (let i = 0; i <= 40; i++) {
-      const x = run.length * i / 40;
-      along.push({
-        position: x,
-        error: profileErrorEstimate({
-          distanceDiameters: x / bore,
-          fitting: upFit.id,
-          orientation,
-          traverses: provisional.traverses,
-          reynolds: designPoint.reynolds,
-          fluidAngle: provisional.fluidAngle,
-          relativeRoughness: rr,
-        }).error,
-      });
-    }
-    tr.push(
-      traceEntry(
-        "formulation: distorted-profile model (estimate)",
-        "lib/installation",
-        "",
-        "snellpath-installation-model",
-        "recalled",
-      ),
-    );
-    straightRun = {
-      verdict: check.verdict,
-      position,
-      positionSource: run.plannedPosition !== undefined ? "planned" : "recommended",
-      upstreamDiameters: check.upstreamDiameters,
-      downstreamDiameters: check.downstreamDiameters,
-      requiredUpstream: check.requiredUpstream,
-      requiredDownstream: check.requiredDownstream,
-      commonPracticePosition: rank.commonPracticePosition,
-      recommendedPosition: rank.recommendedPosition,
-      recommendedOrientation: rank.recommendedOrientation,
-      estimatedProfileError: est.error,
-      estimatedProfileErrorSpread: est.spread,
-      reasons: check.reasons,
-      notes: [...rank.notes, est.note],
-      errorAlongRun: along,
-      runLength: run.length,
-      upstreamFitting: upFit.id,
-      downstreamFitting: downFit.id,
-    };
-  } else {
-    warnings.push({
-      code: "no-run",
-      message: "no straight run described: installation effects are not assessed",
-    });
-  }
+  const runStage = planStraightRun({
+    run: site.run,
+    bore,
+    relativeRoughness: rr,
+    points,
+    traverses: provisional.traverses,
+    fluidAngle: provisional.fluidAngle,
+  });
+  warnings.push(...runStage.warnings);
+  addTrace(runStage.trace);
+  const { straightRun, installHalf } = runStage;
 
   // --- uncertainty ---------------------------------------------------------------------
   const linThick = lining.reduce((s, l) => s + l.thickness, 0);
@@ -1265,10 +841,6 @@ function dedupeTrace(tr: readonly TraceEntry[]): TraceEntry[] {
     out.push(t);
   }
   return out;
-}
-
-function fmtMm(x: number): string {
-  return `${Number((x * 1000).toPrecision(4))} mm`;
 }
 
 /** Re-exported for reports: the model's input names, in order. */

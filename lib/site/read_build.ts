@@ -534,7 +534,8 @@ async function readTransducer(ctx: Ctx, top: Record<string, unknown>): Promise<S
   const t: SiteTransducer = { wedgeAngle, frequency };
   if (wedgeMaterial !== undefined) t.wedgeMaterial = wedgeMaterial;
   if (wedgeSoundSpeed !== undefined) t.wedgeSoundSpeed = wedgeSoundSpeed;
-  const opt: [keyof SiteTransducer, "time" | "length", Limit, string][] = [
+  const opt: [keyof SiteTransducer, "time" | "length" | "temperature", Limit, string][] = [
+    ["wedgeReferenceTemperature", "temperature", L.temperature, "a temperature"],
     ["timingResolution", "time", L.timingResolution, "a time"],
     ["zeroOffset", "time", L.zeroOffset, "a time"],
     ["fixedDelay", "time", L.fixedDelay, "a time"],

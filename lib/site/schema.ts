@@ -118,6 +118,8 @@ export interface SiteTransducer {
   fixedDelay?: number;
   /** Change of wedge sound speed with temperature, m/s/K. */
   wedgeTemperatureCoefficient?: number;
+  /** Temperature at which a stated wedge sound speed holds, K (default: the line temperature). */
+  wedgeReferenceTemperature?: number;
   /** Element height, m. */
   elementHeight?: number;
   /** Index offset, m (signed). */
@@ -283,6 +285,7 @@ export const SiteInputSchema: SiteInputValidator = z.strictObject({
     zeroOffset: finite.optional(),
     fixedDelay: nonNegative.optional(),
     wedgeTemperatureCoefficient: finite.optional(),
+    wedgeReferenceTemperature: positive.optional(),
     elementHeight: positive.optional(),
     indexOffset: finite.optional(),
   }),
@@ -364,6 +367,7 @@ export const SITE_KEYS: Readonly<Record<string, readonly string[]>> = {
     "zeroOffset",
     "fixedDelay",
     "wedgeTemperatureCoefficient",
+    "wedgeReferenceTemperature",
     "elementHeight",
     "indexOffset",
   ],
