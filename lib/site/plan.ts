@@ -150,6 +150,12 @@ export interface PlanBudgetLine {
   readonly source: string;
   /** Basis of the value. */
   readonly basis: string;
+  /**
+   * Asymmetric tolerance band only: centre of [x − minus, x + plus] minus x, SI. The GUM row
+   * keeps x and u = (plus + minus)/√12 (JCGM 100 §4.3.8); the Monte Carlo draws are centred
+   * on x + centreOffset (JCGM 101 §6.4.2.1).
+   */
+  readonly centreOffset?: number;
 }
 
 /** The plan of one site. SI throughout. */
@@ -425,7 +431,7 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
     reg,
   });
   addTrace(mStage.trace);
-  const { mountingPlans, wallTolHalf, odHalf } = mStage;
+  const { mountingPlans, wallTolHalf, odHalf, tolOffsets } = mStage;
   const budgetWarnings = mStage.warnings;
   for (const w of budgetWarnings) {
     if (!warnings.some((x) => x.message === w.message)) warnings.push(w);
@@ -475,6 +481,7 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
         "m",
         rp.tolerances?.source ?? "common-practice",
         rp.tolerances ? rp.tolerances.basis as UncertainInput["basis"] : "common-practice",
+        tolOffsets.outsideDiameter,
       ),
       u(
         "wall thickness",
@@ -490,6 +497,7 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
           : rp.tolerances
           ? rp.tolerances.basis as UncertainInput["basis"]
           : "common-practice",
+        tolOffsets.wallThickness,
       ),
       u(
         "lining thickness",
@@ -587,6 +595,7 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
       share: b.share,
       source: inp.source ?? "",
       basis: inp.basis ?? "",
+      ...(inp.centreOffset ? { centreOffset: inp.centreOffset } : {}),
     };
   });
   let mc: SitePlan["uncertainty"]["monteCarlo"];
@@ -737,8 +746,10 @@ function u(
   unit: string,
   source: string,
   basis: UncertainInput["basis"],
+  centreOffset = 0,
 ): UncertainInput {
-  return { name, value, standardUncertainty, distribution, unit, source, basis };
+  const input = { name, value, standardUncertainty, distribution, unit, source, basis };
+  return centreOffset === 0 ? input : { ...input, centreOffset };
 }
 
 /**

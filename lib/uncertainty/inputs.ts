@@ -33,6 +33,15 @@ export interface UncertainInput {
   readonly standardUncertainty: number;
   /** Distribution assigned to X_i. */
   readonly distribution: Distribution;
+  /**
+   * Asymmetric bounds (Monte Carlo only): the centre of the assigned distribution minus the
+   * best estimate, SI. For an input known only to lie in [x − b₋, x + b₊] with b₋ ≠ b₊, GUM
+   * propagation keeps the estimate x and u² = (b₊ + b₋)²/12 (JCGM 100:2008 §4.3.8); the
+   * Monte Carlo draws take the rectangular distribution R(x − b₋, x + b₊), whose expectation
+   * is x + (b₊ − b₋)/2 (JCGM 101:2008 §6.4.2.1), so `centreOffset` = (b₊ − b₋)/2. Omitted
+   * means 0 (symmetric).
+   */
+  readonly centreOffset?: number;
   /** Degrees of freedom ν_i (Type A evaluations); omitted means infinite. */
   readonly degreesOfFreedom?: number;
   /** SI unit of value and uncertainty, for reports. */
@@ -107,6 +116,10 @@ export function checkInputs(inputs: readonly UncertainInput[]): Float64Array {
         JSON.stringify(inp.distribution),
         `one of: ${DISTRIBUTIONS.join(", ")}`,
       );
+    }
+    const off = inp.centreOffset;
+    if (off !== undefined && !(typeof off === "number" && Number.isFinite(off))) {
+      throw new InputError(`${inp.name}.centreOffset`, String(off), "a finite number (SI)");
     }
     const nu = inp.degreesOfFreedom;
     if (nu !== undefined && !(typeof nu === "number" && nu > 0)) {

@@ -62,7 +62,8 @@ const KIND_NORMAL = 0, KIND_RECT = 1, KIND_TRI = 2, KIND_U = 3, KIND_FIXED = 4, 
  *
  * Method: JCGM 101:2008 §7. Draws: normal by the Marsaglia polar method; rectangular
  * x + a(2U − 1); triangular x + a(U₁ + U₂ − 1); U-shaped (arc-sine) x + a·cos(πU), with the
- * half-widths a = √3·u, √6·u, √2·u; correlated normal inputs as x + u·(L z), L the Cholesky
+ * half-widths a = √3·u, √6·u, √2·u, each centred on x + `centreOffset` (asymmetric bounds,
+ * JCGM 101 §6.4.2.1; 0 when omitted); correlated normal inputs as x + u·(L z), L the Cholesky
  * factor of their correlation matrix. U from a seeded xoshiro128** stream, so a run is
  * reproducible bit for bit. Output: mean, standard deviation (divisor M − 1), and from the
  * sorted draws the probabilistically symmetric interval [y_(r), y_(r+q)], q = pM (rounded to
@@ -100,6 +101,8 @@ export function monteCarlo(
   }
   const est = checkInputs(inputs);
   const n = inputs.length;
+  // Asymmetric bounds: draws are centred on the middle of [x − b₋, x + b₊] (JCGM 101 §6.4.2.1).
+  for (let i = 0; i < n; i++) est[i] += inputs[i].centreOffset ?? 0;
   const draws = options.draws ?? 100_000;
   if (!Number.isInteger(draws) || draws < 100 || draws > 50_000_000) {
     throw new InputError("draws", String(draws), "an integer from 100 to 50000000");

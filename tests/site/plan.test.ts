@@ -220,3 +220,27 @@ Deno.test("plans are reproducible bit for bit (seeded Monte Carlo)", async () =>
   const b: SitePlan = planSite(site, { monteCarlo: { draws: 10_000, seed: 11 } });
   assert.equal(JSON.stringify(a), JSON.stringify(b));
 });
+
+Deno.test("asymmetric catalogue tolerances stay asymmetric in the budget (JCGM 100 §4.3.8, JCGM 101 §6.4.2.1)", async () => {
+  const { pipe } = await import("../../lib/pipe/mod.ts");
+  const rp = pipe({ standard: "ASME B36.10M", nps: "8", schedule: "40", material: "carbon-steel" });
+  const tol = rp.tolerances!;
+  const site = await readSiteText(BASE);
+  const plan = planSite(site, { monteCarlo: { draws: 20_000, seed: 1 } });
+  const row = (name: string) => plan.uncertainty.budget.find((b) => b.name === name)!;
+  for (
+    const [name, sides] of [
+      ["outside diameter", tol.outsideDiameter],
+      ["wall thickness", tol.wallThickness],
+    ] as const
+  ) {
+    const plus = Math.abs(sides.plus ?? 0), minus = Math.abs(sides.minus ?? 0);
+    const b = row(name);
+    // GUM row: estimate at nominal, u = (b₊ + b₋)/√12.
+    closeRel(b.standardUncertainty, (plus + minus) / Math.sqrt(12), 1e-12, `${name} u`);
+    if (plus === minus) assert.equal(b.centreOffset, undefined, `${name} symmetric`);
+    else closeRel(b.centreOffset!, (plus - minus) / 2, 1e-12, `${name} centre offset`);
+  }
+  // The ASTM A530 wall band (−12.5 %, no plus side) is asymmetric: the row carries the offset.
+  assert.ok(row("wall thickness").centreOffset! < 0, "wall band lies below the nominal");
+});

@@ -93,3 +93,38 @@ Deno.test("Monte Carlo options are checked and non-finite outputs are refused", 
       shortest.symmetricInterval[1] - shortest.symmetricInterval[0],
   );
 });
+
+Deno.test("asymmetric bounds: draws on [x − b₋, x + b₊], GUM keeps x and (b₊ + b₋)/√12", () => {
+  // A wall of 8 mm known to lie in [7 mm, 8 mm] (−12.5 % style band, no plus side): b₋ = 1 mm,
+  // b₊ = 0. JCGM 101 §6.4.2.1: R(a, b) has expectation (a + b)/2 and variance (b − a)²/12;
+  // JCGM 100 §4.3.8: u² = (b₊ + b₋)²/12 about the stated estimate.
+  const bMinus = 1e-3, bPlus = 0, x0 = 8e-3;
+  const inputs: UncertainInput[] = [{
+    name: "wall",
+    value: x0,
+    standardUncertainty: (bPlus + bMinus) / Math.sqrt(12),
+    distribution: "rectangular",
+    centreOffset: (bPlus - bMinus) / 2,
+  }];
+  const r = monteCarlo((x) => x[0], inputs, { draws: 200_000, seed: 5, keepValues: true });
+  const v = r.values!;
+  assert.ok(v[0] >= x0 - bMinus && v[v.length - 1] <= x0 + bPlus, "support is the stated band");
+  assert.ok(v[0] < x0 - 0.99 * bMinus && v[v.length - 1] > x0 - 0.01 * bMinus, "reaches both ends");
+  closeAbs(r.mean, x0 - bMinus / 2, 5e-6, "mean at the middle of the band");
+  closeRel(r.standardUncertainty, 1e-3 / Math.sqrt(12), 0.01, "u of R(a,b)");
+  // A non-linear model: E[X²] on R(a,b) = (a² + ab + b²)/3, in closed form.
+  const sq = monteCarlo((x) => x[0] * x[0], inputs, { draws: 200_000, seed: 6 });
+  const a = x0 - bMinus, b = x0 + bPlus;
+  closeRel(sq.mean, (a * a + a * b + b * b) / 3, 1e-4, "E[X²] on R(a,b)");
+  // Symmetric band: centreOffset 0 and omitted give the same draws bit for bit.
+  const sym = { ...inputs[0], centreOffset: 0 };
+  const base: UncertainInput = { ...inputs[0] };
+  delete (base as { centreOffset?: number }).centreOffset;
+  const r0 = monteCarlo((x) => x[0], [sym], { draws: 1000, seed: 7 });
+  const r1 = monteCarlo((x) => x[0], [base], { draws: 1000, seed: 7 });
+  assert.equal(r0.mean, r1.mean);
+  assert.throws(
+    () => monteCarlo((x) => x[0], [{ ...sym, centreOffset: NaN }], { draws: 1000 }),
+    InputError,
+  );
+});

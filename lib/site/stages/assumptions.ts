@@ -72,6 +72,26 @@ export function halfWidthTol(
 }
 
 /**
+ * Centre offset of a tolerance band: (|plus| − |minus|)/2, the distance from the nominal value
+ * to the middle of [nominal − minus, nominal + plus] (JCGM 101:2008 §6.4.2.1); 0 when the band
+ * is symmetric or absent. A side the standard leaves unlimited counts as 0 here, as in
+ * {@link halfWidthTol}.
+ *
+ * @param t tolerance, m (plus and minus as magnitudes or signed)
+ * @returns centre offset, m
+ * @example
+ * ```ts
+ * import { centreOffsetTol } from "./assumptions.ts";
+ * if (centreOffsetTol({ plus: 1e-3, minus: 3e-3 }) !== -1e-3) throw new Error();
+ * if (centreOffsetTol(undefined) !== 0) throw new Error();
+ * ```
+ */
+export function centreOffsetTol(t: { plus?: number; minus?: number } | undefined): number {
+  if (!t) return 0;
+  return (Math.abs(t.plus ?? 0) - Math.abs(t.minus ?? 0)) / 2;
+}
+
+/**
  * A length in m shown in mm to four significant figures.
  *
  * @param x length, m

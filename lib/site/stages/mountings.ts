@@ -25,7 +25,7 @@ import {
 } from "../../acoustics/mod.ts";
 import type { SiteInput } from "../schema.ts";
 import type { MountingPlan, OperatingPoint } from "../plan.ts";
-import { halfWidthTol, mountingName, PLAN_ASSUMPTIONS } from "./assumptions.ts";
+import { centreOffsetTol, halfWidthTol, mountingName, PLAN_ASSUMPTIONS } from "./assumptions.ts";
 import type { PipeStage } from "./pipe.ts";
 
 /** Input of {@link planMountings}: SI throughout (m, m/s, K, Pa, s). */
@@ -87,6 +87,11 @@ export interface MountingsStage {
   readonly wallTolHalf: number;
   /** Outside-diameter half-width, m. */
   readonly odHalf: number;
+  /**
+   * Centre offsets of the wall and outside-diameter tolerance bands, m ((plus − minus)/2; 0 for
+   * a symmetric band, a gauged wall or an assumed band), for the Monte Carlo draws.
+   */
+  readonly tolOffsets: { readonly wallThickness: number; readonly outsideDiameter: number };
   /** Signal-budget warnings (may repeat; the caller drops repeats). */
   readonly warnings: Warning[];
   /** Trace of the first mounting's signal budget. */
@@ -253,5 +258,11 @@ export function planMountings(input: MountingsStageInput): MountingsStage {
     });
     if (n === mountings[0]) addTrace(budget.trace);
   }
-  return { mountingPlans, wallTolHalf, odHalf, warnings: budgetWarnings, trace: tr };
+  const tolOffsets = {
+    wallThickness: sp.measuredWallThickness !== undefined
+      ? 0
+      : centreOffsetTol(rp.tolerances?.wallThickness),
+    outsideDiameter: centreOffsetTol(rp.tolerances?.outsideDiameter),
+  };
+  return { mountingPlans, wallTolHalf, odHalf, tolOffsets, warnings: budgetWarnings, trace: tr };
 }
