@@ -269,6 +269,8 @@ export interface SitePlan {
     readonly upstreamFitting: string;
     /** Downstream fitting id. */
     readonly downstreamFitting: string;
+    /** True when the site did not name the downstream fitting and the plan assumed one. */
+    readonly downstreamAssumed?: boolean;
   };
   /** Uncertainty budget of the recommended mounting. */
   readonly uncertainty: {

@@ -589,8 +589,9 @@ async function readRun(ctx: Ctx, top: Record<string, unknown>): Promise<SiteRun 
     "a length",
   );
   const upstream = await readEnd(ctx, o, "upstream");
-  const downstream = await readEnd(ctx, o, "downstream");
-  const run: SiteRun = { length, upstream, downstream };
+  // The downstream fitting may be left out: the plan then assumes the most demanding one.
+  const run: SiteRun = { length, upstream };
+  if (o.downstream !== undefined) run.downstream = await readEnd(ctx, o, "downstream");
   const pos = await quantity(
     ctx,
     o,

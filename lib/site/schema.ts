@@ -140,8 +140,11 @@ export interface SiteRun {
   length: number;
   /** Fitting at the upstream end. */
   upstream: SiteFitting;
-  /** Fitting at the downstream end. */
-  downstream: SiteFitting;
+  /**
+   * Fitting at the downstream end; optional: when absent the plan assumes the registry fitting
+   * with the most demanding downstream requirement and says so in a `default` warning.
+   */
+  downstream?: SiteFitting;
   /** Planned position from the upstream fitting, m. */
   plannedPosition?: number;
 }
@@ -293,7 +296,7 @@ export const SiteInputSchema: SiteInputValidator = z.strictObject({
   run: z.strictObject({
     length: positive,
     upstream: fitting,
-    downstream: fitting,
+    downstream: fitting.optional(),
     plannedPosition: nonNegative.optional(),
   }).optional(),
   targetUncertainty: finite.gt(0).lt(1).optional(),

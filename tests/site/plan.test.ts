@@ -244,3 +244,30 @@ Deno.test("asymmetric catalogue tolerances stay asymmetric in the budget (JCGM 1
   // The ASTM A530 wall band (−12.5 %, no plus side) is asymmetric: the row carries the offset.
   assert.ok(row("wall thickness").centreOffset! < 0, "wall band lies below the nominal");
 });
+
+Deno.test("a run without its downstream fitting plans with the most demanding one assumed", async () => {
+  const site = await readSiteFile("tests/site/run-without-downstream.yaml");
+  assert.equal(site.run?.downstream, undefined);
+  const plan = planSite(site, { monteCarlo: false });
+  const sr = plan.straightRun!;
+  assert.equal(sr.downstreamAssumed, true);
+  // Independent of the plan: the largest downstream requirement among the registry fittings.
+  const most = Math.max(
+    ...defaultRegistry().fittings().map((f) => f.straightRun.downstream.diameters),
+  );
+  assert.equal(
+    defaultRegistry().fitting(sr.downstreamFitting).straightRun.downstream.diameters,
+    most,
+  );
+  assert.equal(sr.requiredDownstream, most);
+  assert.ok(
+    plan.warnings.some((w) => w.code === "default" && w.message.startsWith("run.downstream")),
+  );
+  // Naming the fitting removes the assumption.
+  const named = planSite(
+    { ...site, run: { ...site.run!, downstream: { fitting: "gate-valve" } } },
+    { monteCarlo: false },
+  );
+  assert.equal(named.straightRun!.downstreamAssumed, undefined);
+  assert.equal(named.straightRun!.downstreamFitting, "gate-valve");
+});

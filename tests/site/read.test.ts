@@ -101,7 +101,7 @@ Deno.test("full shape: every key read into SI", async () => {
   assert.equal(s.transducer.wedgeTemperatureCoefficient, -2.5);
   assert.deepEqual(s.mountings, [1, 2, 4]);
   closeRel(s.run!.upstream.orientation!, Math.PI / 2, 1e-14, "orientation");
-  assert.equal(s.run!.downstream.fitting, "gate-valve");
+  assert.equal(s.run!.downstream?.fitting, "gate-valve");
   assert.equal(s.run!.plannedPosition, 4);
   closeRel(s.targetUncertainty!, 0.02, 1e-14, "target");
   closeRel(s.content!.solids!, 0.001, 1e-12, "solids");
@@ -352,12 +352,27 @@ Deno.test("CSV row errors name the site id and give the column to fill, not YAML
   const { readSitesCsv } = await import("../../lib/site/read.ts");
   const csv = "id,name,pipe.nps,pipe.schedule,pipe.material,fluid.liquid,fluid.temperature," +
     "flow.minimum,flow.maximum,transducer.wedgeMaterial,transducer.wedgeAngle," +
-    "transducer.frequency,mountings,run.length,run.upstream.fitting\n" +
+    "transducer.frequency,mountings,run.length,run.downstream.fitting\n" +
     "s1,A (invented),4,40,carbon-steel,water,20 degC,2 L/s,10 L/s,acrylic,38 deg,1 MHz,V,5 m," +
-    "elbow-90\n";
+    "gate-valve\n";
   const { errors } = await readSitesCsv(csv, { file: "f.csv" });
   assert.equal(errors.length, 1);
-  assert.match(errors[0].message, /^f\.csv row 2 \(site s1\): run\.downstream: got nothing/);
-  assert.match(errors[0].message, /column run\.downstream\.fitting/);
+  assert.match(errors[0].message, /^f\.csv row 2 \(site s1\): run\.upstream: got nothing/);
+  assert.match(errors[0].message, /column run\.upstream\.fitting/);
   assert.ok(!errors[0].message.includes("{"), errors[0].message);
+});
+
+Deno.test("a fleet CSV may leave out the downstream fitting", async () => {
+  const { readSitesCsv } = await import("../../lib/site/read.ts");
+  const csv = "id,name,pipe.nps,pipe.schedule,pipe.material,fluid.liquid,fluid.temperature," +
+    "flow.minimum,flow.maximum,transducer.wedgeMaterial,transducer.wedgeAngle," +
+    "transducer.frequency,mountings,run.length,run.upstream.fitting,run.downstream.fitting\n" +
+    "s1,A (invented),4,40,carbon-steel,water,20 degC,2 L/s,10 L/s,acrylic,38 deg,1 MHz,V,5 m," +
+    "elbow-90,\n" +
+    "s2,B (invented),4,40,carbon-steel,water,20 degC,2 L/s,10 L/s,acrylic,38 deg,1 MHz,V,5 m," +
+    "elbow-90,gate-valve\n";
+  const { sites, errors } = await readSitesCsv(csv, { file: "f.csv" });
+  assert.deepEqual(errors, []);
+  assert.equal(sites[0].run?.downstream, undefined);
+  assert.equal(sites[1].run?.downstream?.fitting, "gate-valve");
 });

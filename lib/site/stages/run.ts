@@ -16,6 +16,7 @@ import {
   rankPositions,
   resolveFitting,
 } from "../../installation/mod.ts";
+import { defaultRegistry } from "../../registry/mod.ts";
 import type { SiteInput } from "../schema.ts";
 import type { OperatingPoint, SitePlan } from "../plan.ts";
 
@@ -80,7 +81,17 @@ export function planStraightRun(input: RunStageInput): RunStage {
   if (input.run) {
     const run = input.run;
     const upFit = resolveFitting(run.upstream.fitting);
-    const downFit = resolveFitting(run.downstream.fitting);
+    const downFit = run.downstream
+      ? resolveFitting(run.downstream.fitting)
+      : mostDemandingDownstream();
+    if (!run.downstream) {
+      const d = downFit.straightRun.downstream.diameters;
+      warnings.push({
+        code: "default",
+        message: `run.downstream not given; the most demanding downstream fitting in the ` +
+          `registry (${downFit.id}, ${d} D downstream) assumed — state the fitting to relax this`,
+      });
+    }
     const rank = rankPositions({
       runLength: run.length,
       diameter: bore,
@@ -148,6 +159,7 @@ export function planStraightRun(input: RunStageInput): RunStage {
       runLength: run.length,
       upstreamFitting: upFit.id,
       downstreamFitting: downFit.id,
+      ...(run.downstream ? {} : { downstreamAssumed: true }),
     };
   } else {
     warnings.push({
@@ -157,4 +169,18 @@ export function planStraightRun(input: RunStageInput): RunStage {
   }
 
   return { straightRun, installHalf, warnings, trace: tr };
+}
+
+/**
+ * The registry fitting with the largest downstream straight-run requirement: the conservative
+ * stand-in when a site does not say what follows the run (first by registry order on a tie).
+ */
+function mostDemandingDownstream(): ReturnType<typeof resolveFitting> {
+  let best = resolveFitting("none");
+  for (const f of defaultRegistry().fittings()) {
+    if (f.straightRun.downstream.diameters > best.straightRun.downstream.diameters) {
+      best = resolveFitting(f.id);
+    }
+  }
+  return best;
 }
