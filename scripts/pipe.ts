@@ -8,7 +8,7 @@ import { parseCli, runMain } from "./_cli.ts";
 import { InputError } from "../lib/errors.ts";
 import { parseQuantity } from "../lib/units.ts";
 import { defaultRegistry } from "../lib/registry/mod.ts";
-import { pipe, type PipeLiningLayer, type ResolvedPipe } from "../lib/pipe/mod.ts";
+import { defaultStandard, pipe, type PipeLiningLayer, type ResolvedPipe } from "../lib/pipe/mod.ts";
 
 const HELP = `
 pipe: look up or describe a pipe (geometry in SI inside, shown in mm).
@@ -212,13 +212,21 @@ runMain(() => {
         throw new InputError(`--${k}`, str(v, k)!, "nothing with --standard/--nps/--schedule");
       }
     }
-    for (const k of ["standard", "nps", "schedule"]) {
+    for (const k of ["nps", "schedule"]) {
       if (str(v, k) === undefined) {
-        throw new InputError(`--${k}`, "nothing", "--standard, --nps and --schedule together");
+        throw new InputError(`--${k}`, "nothing", "--nps and --schedule together");
       }
     }
+    // As in a site file: without --standard, the schedule picks B36.19M (…S) or B36.10M.
+    let standard = str(v, "standard");
+    if (standard === undefined) {
+      standard = defaultStandard(str(v, "schedule")!);
+      console.error(
+        `note: --standard not given; ${standard} assumed from schedule ${str(v, "schedule")}`,
+      );
+    }
     p = pipe({
-      standard: str(v, "standard")!,
+      standard,
       nps: str(v, "nps")!,
       schedule: str(v, "schedule")!,
       ...(str(v, "material") ? { material: str(v, "material") } : {}),

@@ -216,8 +216,15 @@ async function cataloguePipe(
 ): Promise<string | undefined> {
   const { registry } = await import("../lib/registry/mod.ts");
   const { pipe } = await import("../lib/pipe/mod.ts");
+  const { defaultStandard } = await import("../lib/pipe/mod.ts");
+  // As in a site file: without --standard, the schedule picks B36.19M (…S) or B36.10M.
+  let standard = values.standard === undefined ? undefined : String(values.standard);
+  if (standard === undefined && values.schedule !== undefined) {
+    standard = defaultStandard(String(values.schedule));
+    d.notes.push(`pipe standard not given; ${standard} assumed from schedule ${values.schedule}`);
+  }
   const pp = pipe({
-    standard: String(values.standard ?? ""),
+    standard: standard ?? "",
     nps: String(values.nps ?? ""),
     schedule: String(values.schedule ?? ""),
   });
@@ -279,7 +286,7 @@ function statedLining(lt: number[] | undefined, ls: number[] | undefined): Linin
 }
 
 /**
- * Parse `--traverses` "1,2,4".
+ * Parse `--traverses` "1,2,4" (or the trade letters "Z,V,W").
  *
  * @param v the option value
  * @param fallback default list
@@ -287,13 +294,15 @@ function statedLining(lt: number[] | undefined, ls: number[] | undefined): Linin
  */
 export function parseTraverses(v: unknown, fallback: number[]): number[] {
   if (v === undefined) return fallback;
-  const out = String(v).split(",").map((s) => Number(s.trim()));
+  // Trade letters as in site files: Z (1 traverse), V (2), W (4). Common practice.
+  const letters: Record<string, number> = { Z: 1, V: 2, W: 4 };
+  const out = String(v).split(",").map((s) => letters[s.trim().toUpperCase()] ?? Number(s.trim()));
   for (const n of out) {
     if (!Number.isInteger(n) || n < 1 || n > 8) {
       throw new InputError(
         "--traverses",
         JSON.stringify(v),
-        "whole numbers from 1 to 8, e.g. 1,2,4",
+        "whole numbers from 1 to 8 or the letters Z, V, W, e.g. 1,2,4 or Z,V",
       );
     }
   }
@@ -316,7 +325,7 @@ Usage:
     --temperature "20 degC" --wedge-material acrylic --wedge-angle "38 deg"
 ${GEOMETRY_HELP}
 Mounting and window:
-  --traverses 1,2,4          crossings of the bore (1 Z, 2 V, 4 W; up to 8); default 2
+  --traverses 1,2,4          crossings of the bore (1 Z, 2 V, 4 W; up to 8; or Z,V,W); default 2
   --u-fluid-speed "10 m/s"   uncertainty of the liquid speed (search window)
   --u-wall "0.6 mm"          uncertainty of the wall thickness
   --u-wall-speed "50 m/s"    uncertainty of the wall speed (of the mode used)

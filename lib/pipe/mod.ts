@@ -11,7 +11,7 @@
  *
  * @module
  */
-export { pipe, PLAUSIBLE_OUTSIDE_DIAMETER } from "./resolve.ts";
+export { defaultStandard, pipe, PLAUSIBLE_OUTSIDE_DIAMETER } from "./resolve.ts";
 export type {
   PipeCatalogueSpec,
   PipeLiningLayer,

@@ -419,6 +419,25 @@ function fromMeasurements(
 }
 
 /**
+ * The catalogue standard assumed when a pipe names only its size and schedule: ASME B36.19M for
+ * a stainless schedule with the `S` suffix (5S, 10S, 40S, 80S), ASME B36.10M otherwise. Common
+ * practice; the site reader and the scripts use the same rule and say so when they apply it.
+ *
+ * @param schedule the schedule as written (`"40"`, `"10S"`, `"Sch 40S"`, `"STD"`)
+ * @returns the standard's display name
+ * @example
+ * ```ts
+ * import { defaultStandard } from "./resolve.ts";
+ * if (defaultStandard("10S") !== "ASME B36.19M") throw new Error();
+ * if (defaultStandard("40") !== "ASME B36.10M") throw new Error();
+ * ```
+ */
+export function defaultStandard(schedule: string): string {
+  const s = String(schedule).trim().replace(/^sch(edule)?\.?\s*/i, "");
+  return /^\d+S$/i.test(s) ? "ASME B36.19M" : "ASME B36.10M";
+}
+
+/**
  * Resolve a pipe from the catalogue or from measurements into SI geometry.
  *
  * - Catalogue: `{ standard, nps, schedule }` looked up in the registry (data/pipes/*.yaml);

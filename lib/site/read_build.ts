@@ -6,6 +6,7 @@
  */
 import { parseQuantityFull } from "../units.ts";
 import { InputError } from "../errors.ts";
+import { defaultStandard } from "../pipe/resolve.ts";
 import {
   type Ctx,
   describe,
@@ -171,7 +172,7 @@ async function readPipe(ctx: Ctx, top: Record<string, unknown>, defaults: SiteDe
     if (standard !== undefined) p.standard = standard;
     else {
       // Stainless schedules carry an S suffix (ASME B36.19M); the rest are B36.10M. Common practice.
-      p.standard = /^\d+S$/.test(s!) ? "ASME B36.19M" : "ASME B36.10M";
+      p.standard = defaultStandard(s!);
       defaults.push({
         field: "pipe.standard",
         value: p.standard,

@@ -131,3 +131,35 @@ Deno.test("results echo the quantities as the user wrote them, beside SI", async
     /as given: --temperature 68 degF = 293\.15 K, --pressure 30 psig = 308168 Pa/,
   );
 });
+
+Deno.test("scripts take the site file's forms: default standard from the schedule, Z/V/W letters", async () => {
+  // pipe: without --standard, schedule 40 means ASME B36.10M and 10S means B36.19M, as the site
+  // reader assumes (common practice); the note says so on stderr.
+  for (const [sch, std] of [["40", "ASME B36.10M"], ["10S", "ASME B36.19M"]]) {
+    const bare = await runScript("pipe.ts", args(`--nps|4|--schedule|${sch}|--json`), {
+      permissions: RO,
+    });
+    const full = await runScript(
+      "pipe.ts",
+      args(`--standard|${std}|--nps|4|--schedule|${sch}|--json`),
+      { permissions: RO },
+    );
+    assert.equal(bare.code, 0, bare.stderr);
+    assert.equal(bare.stdout, full.stdout, `schedule ${sch}`);
+    assert.match(bare.stderr, new RegExp(`note: --standard not given; ${std} assumed`));
+  }
+  // spacing: Z,V reads as 1,2, and the catalogue pipe needs no --standard either.
+  const common = "--nps|4|--schedule|40|--liquid|water|--temperature|20 degC|" +
+    "--wedge-speed|2720 m/s|--wedge-angle|38 deg|--json|--traverses|";
+  const letters = await runScript("spacing.ts", args(common + "Z,V"), { permissions: RO });
+  const numbers = await runScript(
+    "spacing.ts",
+    args("--standard|ASME B36.10M|" + common + "1,2"),
+    { permissions: RO },
+  );
+  assert.equal(letters.code, 0, letters.stderr);
+  const a = JSON.parse(letters.stdout), b = JSON.parse(numbers.stdout);
+  assert.equal(a.paths.length, 2);
+  assert.deepEqual(a.paths, b.paths);
+  assert.ok(a.notes.some((n: string) => n.includes("ASME B36.10M assumed from schedule 40")));
+});
