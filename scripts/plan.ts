@@ -4,9 +4,7 @@
  *
  * @module
  */
-import { parse as parseYaml } from "yaml";
 import { InputError, SnellpathError } from "../lib/errors.ts";
-import { parseQuantityFull } from "../lib/units.ts";
 import { defaultRegistry } from "../lib/registry/mod.ts";
 import { readSiteFile, readSitesCsvText, siteFiles, streamSitesCsv } from "../lib/site/read.ts";
 import type { SiteInput } from "../lib/site/schema.ts";
@@ -20,7 +18,6 @@ import {
   planJson,
   planMarkdown,
   planText,
-  reconciliationText,
 } from "../lib/report/plan_report.ts";
 import { parseCli, runMain } from "./_cli.ts";
 
@@ -29,7 +26,7 @@ plan — plan clamp-on transit-time flow measurements for one site or a fleet
 
 usage:
   plan FILE|FOLDER|SITES.csv … [--format text|json|md|html|csv] [--out PATH]
-  plan SITE --readings READINGS.yaml [--json]      reconcile readings taken on site
+  plan SITE --readings READINGS.yaml [--format text|md|html|json]   reconcile site readings
 
 options:
   --format F          text (default), json, md, html, csv (csv: the fleet summary)
@@ -40,7 +37,7 @@ options:
   --draws N           Monte Carlo draws (default 100000)
   --seed N            Monte Carlo seed (default 1)
   --registry-hash H   refuse to plan unless the reference data hash is H
-  --readings FILE     readings taken on site (YAML): reconcile them with the plan
+  --readings FILE     readings taken on site (YAML/JSON, docs/readings.md): reconcile them
   --quiet             no progress lines on standard error
   --json              same as --format json
   --debug             print the stack trace of an error
@@ -104,66 +101,10 @@ function safeName(s: string): string {
     "site";
 }
 
+/** The readings file, read by the same reader as the reconcile task (Z/V/W letters too). */
 async function readReadings(path: string): Promise<FieldReadings> {
-  const text = await Deno.readTextFile(path);
-  if (text.length > 64 * 1024) throw new InputError(path, "a file over 64 KiB", "a readings file");
-  let raw: unknown;
-  try {
-    raw = parseYaml(text, { maxAliasCount: 10, uniqueKeys: true });
-  } catch (e) {
-    throw new InputError(
-      path,
-      `invalid YAML (${(e as Error).message.split("\n")[0]})`,
-      "a YAML readings file",
-    );
-  }
-  // deno-lint-ignore no-explicit-any
-  const r = (raw as any)?.readings ?? raw;
-  if (!r || typeof r !== "object") {
-    throw new InputError(`${path}: readings`, "nothing", "a readings object");
-  }
-  const allowed = ["temperature", "wallThickness", "mountings"];
-  for (const k of Object.keys(r)) {
-    if (!allowed.includes(k)) {
-      throw new InputError(`readings.${k}`, "an unknown key", allowed.join(", "));
-    }
-  }
-  const mountings = [];
-  if (!Array.isArray(r.mountings)) {
-    throw new InputError("readings.mountings", "nothing", "a list of mountings");
-  }
-  for (const [i, m] of r.mountings.entries()) {
-    const f = `readings.mountings[${i}]`;
-    const keys = ["traverses", "totalTime", "fixedDelay", "deltaT", "indicatedVelocity"];
-    for (const k of Object.keys(m ?? {})) {
-      if (!keys.includes(k)) throw new InputError(`${f}.${k}`, "an unknown key", keys.join(", "));
-    }
-    if (!Number.isInteger(m.traverses)) {
-      throw new InputError(`${f}.traverses`, String(m.traverses), "an integer 1–8");
-    }
-    mountings.push({
-      traverses: m.traverses,
-      totalTime: await parseQuantityFull(m.totalTime, "time", `${f}.totalTime`),
-      fixedDelay: m.fixedDelay === undefined
-        ? undefined
-        : await parseQuantityFull(m.fixedDelay, "time", `${f}.fixedDelay`),
-      deltaT: m.deltaT === undefined
-        ? undefined
-        : await parseQuantityFull(m.deltaT, "time", `${f}.deltaT`),
-      indicatedVelocity: m.indicatedVelocity === undefined
-        ? undefined
-        : await parseQuantityFull(m.indicatedVelocity, "speed", `${f}.indicatedVelocity`),
-    });
-  }
-  return {
-    temperature: r.temperature === undefined
-      ? undefined
-      : await parseQuantityFull(r.temperature, "temperature", "readings.temperature"),
-    wallThickness: r.wallThickness === undefined
-      ? undefined
-      : await parseQuantityFull(r.wallThickness, "length", "readings.wallThickness"),
-    mountings,
-  };
+  const { readReadingsText } = await import("../lib/site/reconcile_read.ts");
+  return await readReadingsText(await Deno.readTextFile(path), path);
 }
 
 type Source = { kind: "file"; path: string } | { kind: "csv"; path: string };
@@ -245,7 +186,13 @@ async function main(): Promise<number> {
     const site = await readSiteFile(sources[0].path);
     const readings = await readReadings(values.readings as string);
     const r = reconcile(site, readings, { registry: reg });
-    const text = format === "json" ? JSON.stringify(r, null, 2) + "\n" : reconciliationText(r);
+    const { RECONCILE_FORMATS, reconcileReport } = await import(
+      "../lib/report/reconcile_report.ts"
+    );
+    if (!(RECONCILE_FORMATS as readonly string[]).includes(format)) {
+      throw new InputError("--format", format, `with --readings: ${RECONCILE_FORMATS.join(", ")}`);
+    }
+    const text = reconcileReport(r, format as typeof RECONCILE_FORMATS[number]);
     if (values.out) await writeAtomic(values.out as string, text);
     else await writeStdout(text);
     return 0;

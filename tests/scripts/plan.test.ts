@@ -128,6 +128,24 @@ Deno.test("readings: the invented demo readings reconcile to a named cause", asy
   assert.ok(Number.isFinite(x.mountings[0].inferredSoundSpeed));
 });
 
+Deno.test("readings through plan: the reconcile task's reader and formats, others refused", async () => {
+  const args = [
+    "data/demo/02-pump-station-bends.yaml",
+    "--readings",
+    "data/demo/readings/twv-02-readings-zv.yaml", // traverses written as Z and V
+  ];
+  const md = await plan([...args, "--format", "md"]);
+  assert.equal(md.code, 0, md.stderr);
+  assert.match(md.stdout, /^# Reconciliation: /);
+  const html = await plan([...args, "--format", "html"]);
+  assert.equal(html.code, 0, html.stderr);
+  assert.match(html.stdout, /^<!DOCTYPE html>/);
+  const csv = await plan([...args, "--format", "csv"]);
+  assert.equal(csv.code, 2);
+  assert.equal(csv.stdout, "");
+  assert.match(csv.stderr, /--format: got csv; expected with --readings: text, md, html, json/);
+});
+
 Deno.test(
   {
     name: "HTML report renders in headless chromium with no console errors",
