@@ -108,7 +108,7 @@ export async function runMain(main: () => Promise<number | void> | number | void
       console.error(`error: ${firstLine(e)}`);
       code = 2;
     } else if (e instanceof Deno.errors.NotCapable || e instanceof Deno.errors.PermissionDenied) {
-      console.error(`error: not permitted: ${firstLine(e)}`);
+      console.error(`error: ${permissionHint(firstLine(e))}`);
       code = 2;
     } else {
       console.error(`error: internal fault: ${firstLine(e)} (run with --debug for details)`);
@@ -117,6 +117,30 @@ export async function runMain(main: () => Promise<number | void> | number | void
     if (debug && e instanceof Error) console.error(e.stack);
   }
   Deno.exit(code);
+}
+
+/**
+ * One line for a denied permission: what was denied, which flag grants it and how.
+ *
+ * @param message Deno's message, e.g. `Requires read access to "/x/site.yaml", run again with
+ *   the --allow-read flag`
+ * @returns the line to print, naming the flag and the fix
+ * @example
+ * ```ts
+ * import { permissionHint } from "./_cli.ts";
+ * const m = permissionHint('Requires read access to "/srv/a.yaml", run again with the --allow-read flag');
+ * if (!m.includes("--allow-read=/srv/a.yaml")) throw new Error(m);
+ * ```
+ */
+export function permissionHint(message: string): string {
+  const m = /Requires (read|write|net|env|run) access to "?([^",]+)"?/.exec(message);
+  if (!m) return `not permitted: ${message}`;
+  const [, kind, what] = m;
+  const flag = `--allow-${kind}`;
+  const task = kind === "write"
+    ? "the tasks write only below out/: choose --out inside out/, or"
+    : "the plan and reconcile tasks grant it; with deno run,";
+  return `not permitted: ${kind} access to ${what} needs ${flag} (${task} add ${flag}=${what})`;
 }
 
 function firstLine(e: unknown): string {

@@ -162,7 +162,9 @@ async function main(): Promise<number> {
     let info: Deno.FileInfo;
     try {
       info = await Deno.stat(p);
-    } catch {
+    } catch (e) {
+      // A denied read is not a missing file: let the edge name the permission and the fix.
+      if (e instanceof Deno.errors.NotCapable || e instanceof Deno.errors.PermissionDenied) throw e;
       throw new InputError("site file", JSON.stringify(p), "an existing file or folder");
     }
     if (info.isDirectory) {
