@@ -13,6 +13,8 @@ import {
   type Warning,
 } from "../errors.ts";
 import { defaultRegistry } from "../registry/mod.ts";
+import { waterDensity, waterSoundSpeed, waterViscosity } from "../water/mod.ts";
+import { saturationPressureUnchecked } from "../water/saturation.ts";
 import { trace, type TraceEntry } from "../trace.ts";
 import { practiceThreshold } from "./doppler.ts";
 import type { ClampOnPath } from "./path.ts";
@@ -54,8 +56,10 @@ function fsCoefficients(): FsCoefficients {
  * @param frequency f, Hz (> 0)
  * @param temperature T, K; valid 273.15–303.15 K (0–30 °C)
  * @param pressure absolute pressure, Pa (default 101325); valid up to 600 atm gauge
- * @param options extrapolate outside the range (a warning is pushed); a non-positive
- *   extrapolated value always throws
+ * @param options extrapolate outside the range (a warning is pushed). Above 30 °C the
+ *   extrapolation carries the 30 °C value by the classical viscous trend μ/(ρc³) of water
+ *   (IAPWS 2008 viscosity, IAPWS-95 density and sound speed), stated ±25 %; below 0 °C the
+ *   cubic is used as it stands; a non-positive value always throws
  * @returns α, Np/m
  * @throws {OutOfRangeError} outside the validity range unless extrapolating
  *
@@ -98,8 +102,24 @@ export function waterAbsorption(
   );
   const t = temperature - 273.15;
   const a = c.a;
-  const A3 = (a[0] + t * (a[1] + t * (a[2] + t * a[3]))) * c.scale;
+  const cubic = (tc: number) => (a[0] + tc * (a[1] + tc * (a[2] + tc * a[3]))) * c.scale;
   const P3 = 1 + P * (c.b[0] + P * c.b[1]);
+  if (t > c.tRange[1]) {
+    // Above the measured range the cubic soon turns wrong (negative near 75 °C); the caller
+    // opted in to extrapolate (checkRange let it through), so follow the classical trend.
+    const ratio = classicalTrend(temperature, pressure) /
+      classicalTrend(c.tRange[1] + 273.15, pressure);
+    options?.warnings?.push({
+      code: "extrapolated-absorption",
+      message: `water absorption at ${t.toFixed(1)} °C: Fisher & Simmons 1977 holds to ` +
+        `${c.tRange[1]} °C; beyond it its value at ${c.tRange[1]} °C is carried by the ` +
+        `classical viscous trend μ/(ρc³) (IAPWS 2008, IAPWS-95), ±${
+          Math.round(100 * EXTRAPOLATED_ABSORPTION_SPREAD)
+        } % (estimate)`,
+    });
+    return cubic(c.tRange[1]) * ratio * P3 * frequency * frequency;
+  }
+  const A3 = cubic(t);
   const alpha = A3 * P3 * frequency * frequency;
   if (!(alpha > 0)) {
     throw new OutOfRangeError(
@@ -111,6 +131,27 @@ export function waterAbsorption(
     );
   }
   return alpha;
+}
+
+/**
+ * Relative spread stated for the water absorption above 30 °C, where it follows the classical
+ * viscous trend (judgement: the ratio of bulk to shear viscosity is held at its 30 °C value,
+ * while measurements show it falling slowly with temperature). Common practice / estimate.
+ */
+export const EXTRAPOLATED_ABSORPTION_SPREAD = 0.25;
+
+/**
+ * The temperature trend of classical (viscous) absorption, α/f² ∝ (4/3·μ + μ_B)/(ρc³), with
+ * μ_B/μ held constant: μ/(ρc³) of water by IAPWS 2008 and IAPWS-95. Evaluated in the liquid:
+ * where the given pressure would boil the water (a liquid other than water, or a sweep), at
+ * 1.5 × the saturation pressure; above 623 K at 623 K.
+ */
+function classicalTrend(T: number, p: number): number {
+  const Tl = Math.min(T, 623);
+  const pl = Math.max(p, 1.5 * saturationPressureUnchecked(Tl));
+  const rho = waterDensity(Tl, pl);
+  const c = waterSoundSpeed(Tl, pl);
+  return waterViscosity(Tl, pl) / (rho * c * c * c);
 }
 
 /**
