@@ -384,16 +384,8 @@ function htmlTable(
     "</tbody></table>";
 }
 
-/**
- * The plan as a self-contained HTML page with inline SVG drawings: the pipe in section and along
- * its axis with the beam path for each mounting, the run with its fittings and positions, the
- * estimated profile error along the run, spacing against temperature, and the budget as bars.
- *
- * @param p a plan
- * @returns HTML text that opens offline
- */
-export function planHtml(p: SitePlan): string {
-  const b: string[] = [];
+/** HTML report part: title, verdict and the pipe-and-liquid table. */
+function htmlHeadAndPipe(p: SitePlan, b: string[]): void {
   b.push(`<h1>${escapeHtml(p.name)}</h1>`);
   if (p.invented) {
     b.push(`<p><em>Invented scenario: no figure here describes a real installation.</em></p>`);
@@ -421,6 +413,10 @@ export function planHtml(p: SitePlan): string {
     ["sound speed", formatQuantity(p.fluid.soundSpeed, "m/s", 5)],
     ["kinematic viscosity", formatQuantity(p.fluid.kinematicViscosity, "mm^2/s", 3)],
   ]));
+}
+
+/** HTML report part: the mounting table and drawings. */
+function htmlMountings(p: SitePlan, b: string[]): void {
   b.push(`<h2>Mountings</h2>`);
   b.push(htmlTable(MOUNTING_HEADERS, mountingRows(p)));
   const lin = p.pipe.lining.reduce((s, l) => s + l.thickness, 0);
@@ -468,6 +464,10 @@ export function planHtml(p: SitePlan): string {
       })
     }</figure>`);
   }
+}
+
+/** HTML report part: operating points and the straight-run section. */
+function htmlStraightRun(p: SitePlan, b: string[]): void {
   b.push(`<h2>Operating points</h2>`);
   b.push(htmlTable(POINT_HEADERS, pointRows(p)));
   if (p.straightRun) {
@@ -514,6 +514,10 @@ export function planHtml(p: SitePlan): string {
       })
     }</figure>`);
   }
+}
+
+/** HTML report part: uncertainty, cautions, warnings and trace. */
+function htmlBudgetAndTrace(p: SitePlan, b: string[]): void {
   b.push(`<h2>Uncertainty budget</h2>`);
   b.push(
     `<p>${
@@ -553,6 +557,22 @@ export function planHtml(p: SitePlan): string {
   }
   b.push(`<h2>Trace</h2>`);
   b.push(htmlTable(TRACE_HEADERS, traceRows(p)));
+}
+
+/**
+ * The plan as a self-contained HTML page with inline SVG drawings: the pipe in section and along
+ * its axis with the beam path for each mounting, the run with its fittings and positions, the
+ * estimated profile error along the run, spacing against temperature, and the budget as bars.
+ *
+ * @param p a plan
+ * @returns HTML text that opens offline
+ */
+export function planHtml(p: SitePlan): string {
+  const b: string[] = [];
+  htmlHeadAndPipe(p, b);
+  htmlMountings(p, b);
+  htmlStraightRun(p, b);
+  htmlBudgetAndTrace(p, b);
   return htmlPage({ title: p.name, body: b.join("\n"), css: EXTRA_CSS });
 }
 
