@@ -22,6 +22,7 @@ import {
   planText,
   reconciliationText,
 } from "../lib/report/plan_report.ts";
+import { formatCard } from "../lib/report/card.ts";
 import { parseCli, runMain } from "./_cli.ts";
 
 const HELP = `
@@ -32,7 +33,7 @@ usage:
   plan SITE --readings READINGS.yaml [--json]      reconcile readings taken on site
 
 options:
-  --format F          text (default), json, md, html, csv (csv: the fleet summary)
+  --format F          text (default), json, md, html, csv (csv: the fleet summary), card
   --out PATH          write reports there instead of standard output; with several sites (or
                       html) PATH is a folder: one report per site plus index.html / summary.csv
   --monte-carlo       run the Monte Carlo check beside GUM (default with one site)
@@ -58,7 +59,7 @@ examples:
   deno task plan -- sites.csv --format csv --out out/fleet
 `;
 
-const FORMATS = ["text", "json", "md", "html", "csv"] as const;
+const FORMATS = ["text", "json", "md", "html", "csv", "card"] as const;
 type Format = typeof FORMATS[number];
 const EXT: Record<Format, string> = {
   text: "txt",
@@ -66,6 +67,7 @@ const EXT: Record<Format, string> = {
   md: "md",
   html: "html",
   csv: "csv",
+  card: "card.html",
 };
 
 const madeDirs = new Set<string>();
@@ -379,6 +381,8 @@ function render(plan: SitePlan, format: Format): string {
       return planHtml(plan);
     case "csv":
       return fleetCsv([fleetRow(plan)]);
+    case "card":
+      return formatCard(plan, { format: "html" });
     default:
       return planText(plan);
   }

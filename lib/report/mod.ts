@@ -38,3 +38,14 @@ export {
   svgRun,
 } from "./drawings.ts";
 export * from "./plan_report.ts";
+export {
+  CARD_CSS,
+  CARD_SAFETY,
+  type CardOptions,
+  clockPosition,
+  formatCard,
+  inchesSixteenths,
+  type JobCard,
+  jobCard,
+  jobCardHtml,
+} from "./card.ts";

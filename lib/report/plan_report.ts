@@ -16,6 +16,7 @@ import {
   textTable,
 } from "./format.ts";
 import { svgAxialPath, svgPipeSection, svgRun } from "./drawings.ts";
+import { CARD_CSS, formatCard, jobCardHtml } from "./card.ts";
 import { svgBarChart, svgLineChart } from "./svg.ts";
 
 const DEG = 180 / Math.PI;
@@ -134,7 +135,7 @@ const TRACE_HEADERS = ["quantity", "value", "unit", "source", "basis"];
  * ```
  */
 export function planText(p: SitePlan): string {
-  const out: string[] = [];
+  const out: string[] = [formatCard(p), ""];
   out.push(`${p.name}${p.invented ? "  [invented scenario]" : ""}`);
   out.push(`registry ${p.registryHash}`);
   out.push("");
@@ -248,7 +249,7 @@ function sketchRun(p: SitePlan): string {
  */
 export function planMarkdown(p: SitePlan): string {
   const out: string[] = [];
-  out.push(`# ${p.name}`);
+  out.push(`# ${p.name}`, "", formatCard(p, { format: "md" }), "");
   if (p.invented) out.push("\n*Invented scenario: no figure here describes a real installation.*");
   out.push(`\nRegistry hash: \`${p.registryHash}\`\n`);
   out.push(`**Verdict:** ${verdictLine(p)}`);
@@ -387,6 +388,7 @@ function htmlTable(
 /** HTML report part: title, verdict and the pipe-and-liquid table. */
 function htmlHeadAndPipe(p: SitePlan, b: string[]): void {
   b.push(`<h1>${escapeHtml(p.name)}</h1>`);
+  b.push(jobCardHtml(p));
   if (p.invented) {
     b.push(`<p><em>Invented scenario: no figure here describes a real installation.</em></p>`);
   }
@@ -573,7 +575,7 @@ export function planHtml(p: SitePlan): string {
   htmlMountings(p, b);
   htmlStraightRun(p, b);
   htmlBudgetAndTrace(p, b);
-  return htmlPage({ title: p.name, body: b.join("\n"), css: EXTRA_CSS });
+  return htmlPage({ title: p.name, body: b.join("\n"), css: EXTRA_CSS + CARD_CSS });
 }
 
 /**
