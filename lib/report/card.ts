@@ -225,8 +225,10 @@ function rows(c: JobCard): [string, string][] {
     ["spacing", `${mmq(c.spacing)} (${c.spacingInches})`],
     [
       "transducers",
-      `${c.clock[0]} and ${c.clock[1]} o'clock, looking downstream (path plane ` +
-      `${formatQuantity(c.pathPlane, "deg", 3)} from vertical)`,
+      (c.clock[0] === c.clock[1]
+        ? `both at ${c.clock[0]} o'clock`
+        : `${c.clock[0]} and ${c.clock[1]} o'clock`) +
+      `, looking downstream (path plane ${formatQuantity(c.pathPlane, "deg", 3)} from vertical)`,
     ],
     ["position", c.position],
     ["zero-flow transit", `${us(c.zeroFlowTime)} (wall, lining and liquid; no wedge or delay)`],
@@ -289,6 +291,7 @@ export const CARD_CSS = `
 .card th{text-align:left;width:11em;vertical-align:top;padding:.15em .4em}
 .card td{padding:.15em .4em}
 .card ul{margin:.2em 0 .4em;padding-left:1.4em}
+.card ul.check{list-style:none;padding-left:.4em}
 .card .safety{border-left:5px solid #9b2226;padding-left:.6em}
 @page{size:auto;margin:12mm}
 @media print{.card{font-size:10pt;break-inside:avoid}}
@@ -320,7 +323,9 @@ export function jobCardHtml(p: SitePlan): string {
   const e = escapeHtml;
   return `<section class="card"><h2>Job card${c.invented ? " (invented scenario)" : ""}</h2>` +
     `<table>${rows(c).map(([k, v]) => `<tr><th>${e(k)}</th><td>${e(v)}</td></tr>`).join("")}` +
-    `</table><h3>Checklist</h3><ul>${c.checklist.map((x) => `<li>☐ ${e(x)}</li>`).join("")}</ul>` +
+    `</table><h3>Checklist</h3><ul class="check">${
+      c.checklist.map((x) => `<li>☐ ${e(x)}</li>`).join("")
+    }</ul>` +
     `<div class="safety"><h3>Safety</h3><ul>${
       CARD_SAFETY.map((x) => `<li>${e(x)}</li>`).join("")
     }</ul></div></section>`;

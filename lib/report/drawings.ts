@@ -100,6 +100,14 @@ export interface PipeSectionOptions {
   readonly fluidAngle: number;
   /** Number of acoustic paths (beam planes), evenly turned about the axis (default 1). */
   readonly paths?: number;
+  /**
+   * Angle of the (first) path plane from the vertical, rad, counted clockwise looking
+   * downstream (default 0: vertical, transducers at the top). When given, the transducer labels
+   * carry their clock positions and the notes state the viewing direction.
+   */
+  readonly pathPlane?: number;
+  /** Clock-position text per transducer end (first end, opposite end), e.g. ["3:00", "9:00"]. */
+  readonly clock?: readonly [string, string];
   /** Display unit of lengths (default "mm"). */
   readonly unit?: string;
   /** Title (default "Pipe cross-section"). */
@@ -159,8 +167,10 @@ export function svgPipeSection(o: PipeSectionOptions): string {
   // Centre mark.
   out += line(cx - 8, cy, cx + 8, cy, INK, 0.6) + line(cx, cy - 8, cx, cy + 8, INK, 0.6);
 
+  const plane = o.pathPlane === undefined ? 0 : finite("pathPlane", o.pathPlane);
   for (let p = 0; p < paths; p++) {
-    const a = -Math.PI / 2 + p * Math.PI / paths; // first plane vertical, transducers on top
+    // Screen y points down: clockwise from the top is (sin φ, −cos φ), i.e. a = φ − π/2.
+    const a = -Math.PI / 2 + plane + p * Math.PI / paths;
     const ux = Math.cos(a), uy = Math.sin(a);
     out += line(
       cx - ux * (R + 26),
@@ -182,7 +192,8 @@ export function svgPipeSection(o: PipeSectionOptions): string {
         }" width="32" height="14" rx="2" fill="${TRANSDUCER_FILL}" ` +
         `transform="rotate(${c(deg)} ${c(px)} ${c(py)})"/>`;
       const lx = cx + s * ux * (R + 30), ly = cy + s * uy * (R + 34) + 4;
-      const label = n % 2 === 1 ? (s === 1 ? "T1" : "T2") : "T1, T2";
+      const base = n % 2 === 1 ? (s === 1 ? "T1" : "T2") : "T1, T2";
+      const label = o.clock && p === 0 ? `${base} at ${o.clock[s === 1 ? 0 : 1]}` : base;
       const anchor = lx < cx - 20 ? "end" : lx > cx + 20 ? "start" : "middle";
       out += text(lx, ly, paths > 1 ? `${label} (path ${p + 1})` : label, { anchor, size: 13 });
     }
@@ -199,6 +210,9 @@ export function svgPipeSection(o: PipeSectionOptions): string {
     `bore ${q(b.id, unit)}`,
     `${mountingName(n)} mounting, ${n} traverse${n > 1 ? "s" : ""}`,
     `beam in a diametral plane`,
+    ...(o.pathPlane !== undefined
+      ? [`plane ${q(plane, "deg", 3)} from vertical`, "seen looking downstream"]
+      : []),
     `fluid angle ${q(theta, "deg", 3)}`,
     ...(paths > 1 ? [`${paths} paths`] : []),
     ...(exaggerated ? ["wall/lining widened to be seen"] : []),

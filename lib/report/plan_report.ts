@@ -16,7 +16,7 @@ import {
   textTable,
 } from "./format.ts";
 import { svgAxialPath, svgPipeSection, svgRun } from "./drawings.ts";
-import { CARD_CSS, formatCard, jobCardHtml } from "./card.ts";
+import { CARD_CSS, formatCard, jobCard, jobCardHtml } from "./card.ts";
 import { svgBarChart, svgLineChart } from "./svg.ts";
 
 const DEG = 180 / Math.PI;
@@ -424,6 +424,7 @@ function htmlMountings(p: SitePlan, b: string[]): void {
   const lin = p.pipe.lining.reduce((s, l) => s + l.thickness, 0);
   b.push(`<div class="grid">`);
   const rec = p.mountings.find((m) => m.traverses === p.recommendedMounting)!;
+  const card = jobCard(p);
   b.push(`<figure>${
     svgPipeSection({
       outsideDiameter: p.pipe.outsideDiameter,
@@ -431,6 +432,8 @@ function htmlMountings(p: SitePlan, b: string[]): void {
       liningThickness: lin || undefined,
       traverses: rec.traverses,
       fluidAngle: rec.fluidAngle,
+      pathPlane: card.pathPlane,
+      clock: card.clock,
       title: `Cross-section, ${rec.name} mounting`,
     })
   }</figure>`);
