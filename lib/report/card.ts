@@ -254,7 +254,7 @@ function wrap(first: string, text: string, width: number): string[] {
 
 /** The card as terminal text, lines within 100 columns. */
 function cardText(c: JobCard): string {
-  const out = [`JOB CARD  ${c.name}${c.invented ? "  [invented scenario]" : ""}`];
+  const out = wrap("JOB CARD  ", `${c.name}${c.invented ? " [invented scenario]" : ""}`, 100);
   for (const [k, v] of rows(c)) out.push(...wrap(k.padEnd(20), v, 100));
   out.push("checklist");
   for (const x of c.checklist) out.push(...wrap("  [ ] ", x, 100));

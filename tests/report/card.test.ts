@@ -1,0 +1,144 @@
+/**
+ * Job card: inch fractions, clock positions, the card's figures against the plan it reads, the
+ * 100-column text limit, and (headless Chromium, Debian package chromium) one printed page per
+ * demo site and a cross-section drawn in the recommended path plane.
+ */
+import { assert } from "../_assert.ts";
+import { CHROMIUM, hasChromium, renderHtml } from "../_browser.ts";
+import {
+  clockPosition,
+  formatCard,
+  inchesSixteenths,
+  jobCard,
+  planHtml,
+  planMarkdown,
+  planText,
+} from "../../lib/report/mod.ts";
+import { readSiteFile } from "../../lib/site/read.ts";
+import { planSite, type SitePlan } from "../../lib/site/plan.ts";
+
+const DEMO = new URL("../../data/demo/", import.meta.url);
+
+async function demoPlans(): Promise<SitePlan[]> {
+  const out: SitePlan[] = [];
+  for (const e of [...Deno.readDirSync(DEMO)].sort((a, b) => a.name.localeCompare(b.name))) {
+    if (!e.name.endsWith(".yaml")) continue;
+    const site = await readSiteFile(new URL(e.name, DEMO).pathname);
+    out.push(planSite(site, { monteCarlo: false }));
+  }
+  return out;
+}
+
+Deno.test("inches to 1/16 in: exact inch 25.4 mm (NIST SP 811, appendix B)", () => {
+  // 3 7/16 in = 3.4375 × 25.4 mm = 87.3125 mm (arithmetic on the exact definition).
+  assert.equal(inchesSixteenths(0.0873125), "3 7/16 in");
+  assert.equal(inchesSixteenths(0.0508), "2 in");
+  assert.equal(inchesSixteenths(0.015875), "5/8 in");
+  // 1/32 in below 2 in rounds half-sixteenths to the nearest: 1.97 in → 2 in.
+  assert.equal(inchesSixteenths(1.97 * 0.0254), "2 in");
+  assert.throws(() => inchesSixteenths(-1));
+});
+
+Deno.test("clock positions: a clock face has 12 hours over 360° (common practice)", () => {
+  assert.equal(clockPosition(0), "12:00");
+  assert.equal(clockPosition(Math.PI / 2), "3:00");
+  assert.equal(clockPosition(Math.PI), "6:00");
+  assert.equal(clockPosition(3 * Math.PI / 2), "9:00");
+  assert.equal(clockPosition(Math.PI / 4), "1:30");
+  assert.equal(clockPosition(2 * Math.PI + Math.PI / 2), "3:00");
+});
+
+Deno.test("the card reads its figures from the plan, for every demo site", async () => {
+  for (const p of await demoPlans()) {
+    const c = jobCard(p);
+    const m = p.mountings.find((x) => x.traverses === p.recommendedMounting)!;
+    assert.equal(c.spacing, m.spacing);
+    assert.equal(c.zeroFlowTime, m.totalTime);
+    assert.equal(c.deltaTMinimum, m.times.find((t) => t.label === "minimum")?.deltaT);
+    assert.ok(c.window.min <= c.spacing && c.spacing <= c.window.max, "window holds the spacing");
+    // Inch text within 1/32 in of the spacing.
+    const [w, f] = c.spacingInches.replace(" in", "").split(" ");
+    const inch = f ? Number(w) + eval(f) : (w.includes("/") ? eval(w) : Number(w));
+    assert.ok(Math.abs(inch * 0.0254 - c.spacing) <= 0.0254 / 32 + 1e-12, c.spacingInches);
+    // Z puts the transducers on opposite ends of the plane, V and W on one end.
+    if (m.traverses % 2) assert.notEqual(c.clock[0], c.clock[1]);
+    else assert.equal(c.clock[0], c.clock[1]);
+    if (p.straightRun) {
+      assert.ok(c.position.includes(p.straightRun.upstreamFitting), "names the fitting");
+      assert.ok(c.position.includes("outlet face"), "names the face");
+    }
+    for (const f of ["text", "md", "html"] as const) {
+      const s = formatCard(p, { format: f });
+      assert.ok(/local codes/.test(s) && /licensed/.test(s), `${f}: safety defers to codes`);
+      assert.ok(s.includes(c.spacingInches), `${f}: inches shown`);
+    }
+    assert.ok(planText(p).startsWith("JOB CARD"), "text report opens with the card");
+    assert.ok(planMarkdown(p).includes("## Job card"), "markdown report carries the card");
+    assert.ok(planHtml(p).includes('<section class="card">'), "html report carries the card");
+  }
+});
+
+Deno.test("card text stays within 100 columns for every demo site", async () => {
+  for (const p of await demoPlans()) {
+    for (const l of formatCard(p).split("\n")) assert.ok(l.length <= 100, l);
+  }
+});
+
+Deno.test({
+  name: "the HTML card prints on one page (Chromium print-to-pdf, A4 and Letter)",
+  ignore: !hasChromium(),
+  fn: async () => {
+    const dir = await Deno.makeTempDir();
+    for (const p of await demoPlans()) {
+      for (const size of ["A4", "letter"]) {
+        const html = formatCard(p, { format: "html" }).replace(
+          "@page{size:auto;",
+          `@page{size:${size};`,
+        );
+        const file = `${dir}/card.html`, pdf = `${dir}/card.pdf`;
+        await Deno.writeTextFile(file, html);
+        const r = await new Deno.Command(CHROMIUM, {
+          args: [
+            "--headless",
+            "--no-sandbox",
+            "--disable-gpu",
+            "--no-pdf-header-footer",
+            `--print-to-pdf=${pdf}`,
+            `file://${file}`,
+          ],
+          stdout: "null",
+          stderr: "null",
+        }).output();
+        assert.ok(r.success, "chromium ran");
+        const bytes = new TextDecoder("latin1").decode(await Deno.readFile(pdf));
+        const pages = (bytes.match(/\/Type\s*\/Page(?![s\w])/g) ?? []).length;
+        assert.equal(pages, 1, `${p.id} ${size}: pages`);
+      }
+    }
+    await Deno.remove(dir, { recursive: true });
+  },
+});
+
+Deno.test({
+  name: "the cross-section in the browser lies in the card's path plane",
+  ignore: !hasChromium(),
+  fn: async () => {
+    for (const p of await demoPlans()) {
+      const c = jobCard(p);
+      const r = await renderHtml(planHtml(p));
+      assert.deepEqual(r.console, [], "console messages");
+      const svg = r.dom.slice(r.dom.indexOf("Cross-section"));
+      // The bore chord: the first line of stroke-width 2.2.
+      const m = svg.match(
+        /<line x1="([-\d.]+)" y1="([-\d.]+)" x2="([-\d.]+)" y2="([-\d.]+)"[^>]*stroke-width="2.2"/,
+      );
+      assert.ok(m, "beam line found");
+      const [x1, y1, x2, y2] = m!.slice(1).map(Number);
+      // Clockwise from the top looking downstream, screen y down: direction (sin φ, −cos φ).
+      const angle = Math.atan2(x2 - x1, -(y2 - y1));
+      const d = ((angle - c.pathPlane) % Math.PI + Math.PI) % Math.PI;
+      assert.ok(Math.min(d, Math.PI - d) < 0.01, `${p.id}: plane ${angle} vs ${c.pathPlane}`);
+      assert.ok(svg.includes(`T1${c.traverses % 2 ? "" : ", T2"} at ${c.clock[0]}`), "clock label");
+    }
+  },
+});
