@@ -13,6 +13,7 @@ import {
   formatQuantity,
   htmlPage,
   markdownTable,
+  type TableCell,
   textTable,
 } from "./format.ts";
 import { svgAxialPath, svgPipeSection, svgRun } from "./drawings.ts";
@@ -113,6 +114,55 @@ function traceRows(p: SitePlan | Reconciliation): (string | number)[][] {
 
 const TRACE_HEADERS = ["quantity", "value", "unit", "source", "basis"];
 
+/** Text-report width limit, columns. */
+export const TEXT_WIDTH = 100;
+
+/**
+ * A text table within {@link TEXT_WIDTH} columns: when the whole table is wider, its columns are
+ * split into groups (the first column repeated in each), one table per group.
+ */
+function fitTable(headers: readonly string[], rows: readonly (readonly TableCell[])[]): string {
+  const whole = textTable(headers, rows);
+  if (whole.split("\n").every((l) => l.length <= TEXT_WIDTH)) return whole;
+  const col = (j: number) => headers.map((_, k) => k).filter((k) => k === 0 || k === j);
+  const groups: number[][] = [];
+  let cur: number[] = [0];
+  for (let j = 1; j < headers.length; j++) {
+    const tryCols = [...cur, j];
+    const t = textTable(tryCols.map((k) => headers[k]), rows.map((r) => tryCols.map((k) => r[k])));
+    if (cur.length > 1 && t.split("\n").some((l) => l.length > TEXT_WIDTH)) {
+      groups.push(cur);
+      cur = col(j);
+    } else cur = tryCols;
+  }
+  groups.push(cur);
+  return groups.map((g) => textTable(g.map((k) => headers[k]), rows.map((r) => g.map((k) => r[k]))))
+    .join("\n\n");
+}
+
+/** Wrap prose lines longer than {@link TEXT_WIDTH}, continuing under their own indent. */
+function fitLines(text: string): string {
+  const out: string[] = [];
+  for (const l of text.split("\n")) {
+    if (l.length <= TEXT_WIDTH) {
+      out.push(l);
+      continue;
+    }
+    const lead = /^(\s*(?:- )?)/.exec(l)![1];
+    const indent = " ".repeat(lead.length + 2);
+    let line = "";
+    for (const w of l.slice(lead.length).split(" ")) {
+      const cand = line ? `${line} ${w}` : lead + w;
+      if (line && cand.length > TEXT_WIDTH) {
+        out.push(line);
+        line = indent + w;
+      } else line = cand;
+    }
+    out.push(line);
+  }
+  return out.join("\n");
+}
+
 /**
  * The plan as terminal text.
  *
@@ -170,9 +220,9 @@ export function planText(p: SitePlan): string {
     } (${p.recommendedMounting} traverses)`,
   );
   out.push("");
-  out.push(textTable(MOUNTING_HEADERS, mountingRows(p)));
+  out.push(fitTable(MOUNTING_HEADERS, mountingRows(p)));
   out.push("");
-  out.push(textTable(POINT_HEADERS, pointRows(p)));
+  out.push(fitTable(POINT_HEADERS, pointRows(p)));
   out.push(`profile factor changes by ${pct(p.profileFactorChange)} across the flow range`);
   if (p.straightRun) {
     const r = p.straightRun;
@@ -214,7 +264,7 @@ export function planText(p: SitePlan): string {
         } (${p.uncertainty.monteCarlo.draws} draws, 95 %)`
         : ""),
   );
-  out.push(textTable(BUDGET_HEADERS, budgetRows(p)));
+  out.push(fitTable(BUDGET_HEADERS, budgetRows(p)));
   out.push("");
   out.push("cautions:");
   for (const c of p.cautions) out.push(`  - ${c}`);
@@ -224,8 +274,8 @@ export function planText(p: SitePlan): string {
   }
   out.push("");
   out.push(`trace (${p.trace.length} entries):`);
-  out.push(textTable(TRACE_HEADERS, traceRows(p)));
-  return out.join("\n") + "\n";
+  out.push(fitTable(TRACE_HEADERS, traceRows(p)));
+  return fitLines(out.join("\n")) + "\n";
 }
 
 /** An ASCII sketch of the run: fittings, the requirement zones and the chosen position. */

@@ -78,9 +78,13 @@ Deno.test("the card reads its figures from the plan, for every demo site", async
   }
 });
 
-Deno.test("card text stays within 100 columns for every demo site", async () => {
+Deno.test("card and text report stay within 100 columns for every demo site", async () => {
   for (const p of await demoPlans()) {
-    for (const l of formatCard(p).split("\n")) assert.ok(l.length <= 100, l);
+    for (const l of formatCard(p).split("\n")) assert.ok([...l].length <= 100, l);
+    const text = planText(p);
+    for (const l of text.split("\n")) assert.ok([...l].length <= 100, l);
+    // Nothing is lost when a wide table is split: every trace source id still appears.
+    for (const t of p.trace) assert.ok(text.includes(t.source), t.source);
   }
 });
 
