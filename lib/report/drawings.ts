@@ -33,6 +33,33 @@ const BEAM = "#1b5e8c";
 const TRANSDUCER_FILL = "#4a4a4a";
 const ACCENT = "#8a1c1c";
 
+/**
+ * The project's own colour for each mounting, used alike in tables, drawings and charts:
+ * Z teal, V raspberry, N violet, W amber; other traverse counts slate.
+ */
+export const MOUNTING_COLOURS: Readonly<Record<string, string>> = Object.freeze({
+  Z: "#0e7c66",
+  V: "#b8336a",
+  N: "#5b4fa8",
+  W: "#c07a00",
+});
+
+/**
+ * Colour of a mounting by its number of traverses ({@link MOUNTING_COLOURS}; slate otherwise).
+ *
+ * @param traverses bore crossings (1 Z, 2 V, 4 W)
+ * @returns a CSS hex colour
+ *
+ * @example
+ * ```ts
+ * import { mountingColour, MOUNTING_COLOURS } from "./drawings.ts";
+ * if (mountingColour(2) !== MOUNTING_COLOURS.V) throw new Error();
+ * ```
+ */
+export function mountingColour(traverses: number): string {
+  return MOUNTING_COLOURS[mountingName(traverses)] ?? "#4f5b66";
+}
+
 /** Trade name of a mounting by its number of traverses (V, Z, W; others by count). */
 export function mountingName(traverses: number): string {
   return traverses === 1
@@ -142,6 +169,7 @@ export function svgPipeSection(o: PipeSectionOptions): string {
   if (!Number.isInteger(paths) || paths < 1 || paths > 8) {
     throw new InputError("paths", String(paths), "an integer from 1 to 8");
   }
+  const beam = mountingColour(n);
   const unit = o.unit ?? "mm";
   const title = o.title ?? "Pipe cross-section";
   const W = 700, H = 520, cx = 260, cy = 250, R = 150;
@@ -177,11 +205,11 @@ export function svgPipeSection(o: PipeSectionOptions): string {
       cy - uy * (R + 26),
       cx + ux * (R + 26),
       cy + uy * (R + 26),
-      BEAM,
+      beam,
       1,
       "6 4",
     );
-    out += line(cx - ux * rBore, cy - uy * rBore, cx + ux * rBore, cy + uy * rBore, BEAM, 2.2);
+    out += line(cx - ux * rBore, cy - uy * rBore, cx + ux * rBore, cy + uy * rBore, beam, 2.2);
     const sides = n % 2 === 1 ? [1, -1] : [1];
     for (const s of sides) {
       const px = cx + s * ux * (R + 7), py = cy + s * uy * (R + 7);
@@ -238,7 +266,7 @@ export function svgPipeSection(o: PipeSectionOptions): string {
   out += sw(ly, WALL_FILL, "wall");
   if (b.lining > 0) out += sw(ly += 18, LINING_FILL, "lining");
   out += sw(ly += 18, FLUID_FILL, "liquid");
-  out += line(xNote, (ly += 18) - 4, xNote + 14, ly - 4, BEAM, 2.2) +
+  out += line(xNote, (ly += 18) - 4, xNote + 14, ly - 4, beam, 2.2) +
     text(xNote + 20, ly, "beam", { size: 12 });
   return svgDocument(
     W,
@@ -371,10 +399,13 @@ export function svgAxialPath(o: AxialPathOptions): string {
   // Axis.
   out += line(x0, (top + yb) / 2, x1, (top + yb) / 2, "#8c8c8c", 0.8, "14 4 2 4");
   // Beam.
-  out += `<polyline points="${points(pts.map(([px, py]) => [X(px), Y(py)]))}" stroke="${BEAM}" ` +
+  out +=
+    `<polyline points="${points(pts.map(([px, py]) => [X(px), Y(py)]))}" stroke="${
+      mountingColour(n)
+    }" ` +
     `stroke-width="2.2" stroke-linejoin="round"/>`;
   for (const [px, py] of [pts[0], pts[pts.length - 1]]) {
-    out += `<circle cx="${c(X(px))}" cy="${c(Y(py))}" r="3" fill="${BEAM}"/>`;
+    out += `<circle cx="${c(X(px))}" cy="${c(Y(py))}" r="3" fill="${mountingColour(n)}"/>`;
   }
   // Transducers: the front face is slanted towards the other transducer.
   const transducer = (xm: number, onTop: boolean, facing: 1 | -1, label: string) => {

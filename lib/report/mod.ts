@@ -31,6 +31,8 @@ export {
 } from "./svg.ts";
 export {
   type AxialPathOptions,
+  MOUNTING_COLOURS,
+  mountingColour,
   type PipeSectionOptions,
   type RunOptions,
   svgAxialPath,

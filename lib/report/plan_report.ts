@@ -16,11 +16,13 @@ import {
   type TableCell,
   textTable,
 } from "./format.ts";
-import { svgAxialPath, svgPipeSection, svgRun } from "./drawings.ts";
+import { mountingColour, svgAxialPath, svgPipeSection, svgRun } from "./drawings.ts";
 import { CARD_CSS, formatCard, jobCard, jobCardHtml } from "./card.ts";
 import { svgBarChart, svgLineChart } from "./svg.ts";
 
 const DEG = 180 / Math.PI;
+/** "1 traverse", "2 traverses". */
+const traverseWord = (n: number) => `${n} traverse${n === 1 ? "" : "s"}`;
 const pct = (x: number, d = 3) => `${Number((x * 100).toPrecision(d))} %`;
 const mm = (x: number, d = 4) => formatQuantity(x, "mm", d);
 
@@ -217,7 +219,7 @@ export function planText(p: SitePlan): string {
   out.push(
     `recommended mounting: ${
       p.mountings.find((m) => m.traverses === p.recommendedMounting)?.name
-    } (${p.recommendedMounting} traverses)`,
+    } (${traverseWord(p.recommendedMounting)})`,
   );
   out.push("");
   out.push(fitTable(MOUNTING_HEADERS, mountingRows(p)));
@@ -470,7 +472,14 @@ function htmlHeadAndPipe(p: SitePlan, b: string[]): void {
 /** HTML report part: the mounting table and drawings. */
 function htmlMountings(p: SitePlan, b: string[]): void {
   b.push(`<h2>Mountings</h2>`);
-  b.push(htmlTable(MOUNTING_HEADERS, mountingRows(p)));
+  b.push(
+    htmlTable(MOUNTING_HEADERS, mountingRows(p)).replace(
+      /<tr><td>([A-Z][\w-]*) \((\d+)\)<\/td>/g,
+      (_, name, n) =>
+        `<tr><td><svg width="12" height="12" aria-hidden="true"><rect width="12" height="12" ` +
+        `fill="${mountingColour(Number(n))}"/></svg> ${name} (${n})</td>`,
+    ),
+  );
   const lin = p.pipe.lining.reduce((s, l) => s + l.thickness, 0);
   b.push(`<div class="grid">`);
   const rec = p.mountings.find((m) => m.traverses === p.recommendedMounting)!;
@@ -498,7 +507,7 @@ function htmlMountings(p: SitePlan, b: string[]): void {
         fluidAngle: m.fluidAngle,
         wallAngle: m.wallAngle,
         liningAngle: m.liningAngles[0],
-        title: `${m.name} mounting (${m.traverses} traverses): spacing ${mm(m.spacing)}`,
+        title: `${m.name} mounting (${traverseWord(m.traverses)}): spacing ${mm(m.spacing)}`,
       })
     }</figure>`);
   }
@@ -512,6 +521,7 @@ function htmlMountings(p: SitePlan, b: string[]): void {
         yLabel: "spacing (mm)",
         series: temps.map((m) => ({
           name: `${m.name} mounting`,
+          colour: mountingColour(m.traverses),
           points: m.overTemperature!.map((r) =>
             [r.temperature - 273.15, r.spacing * 1000] as const
           ),

@@ -10,6 +10,8 @@ import {
   formatCard,
   inchesSixteenths,
   jobCard,
+  MOUNTING_COLOURS,
+  mountingColour,
   planHtml,
   planMarkdown,
   planText,
@@ -145,4 +147,31 @@ Deno.test({
       assert.ok(svg.includes(`T1${c.traverses % 2 ? "" : ", T2"} at ${c.clock[0]}`), "clock label");
     }
   },
+});
+
+Deno.test("one colour per mounting, the same in the table, the drawings and the chart", async () => {
+  // Distinct colours, none taken from a plotting library's default cycle (common practice:
+  // the first colours of the usual default cycles, recalled).
+  const cycle = ["#1f77b4", "#ff7f0e", "#2ca02c", "#d62728", "#9467bd", "#8c564b"];
+  const own = Object.values(MOUNTING_COLOURS);
+  assert.equal(new Set(own).size, own.length, "distinct");
+  for (const x of own) assert.ok(!cycle.includes(x), x);
+  for (const p of await demoPlans()) {
+    const html = planHtml(p);
+    for (const m of p.mountings) {
+      const col = mountingColour(m.traverses);
+      const row = html.indexOf(`fill="${col}"/></svg> ${m.name} (${m.traverses})</td>`);
+      assert.ok(row > 0, `${p.id} ${m.name}: table swatch`);
+      const word = m.traverses === 1 ? "traverse" : "traverses";
+      const axial = html.indexOf(`${m.name} mounting (${m.traverses} ${word})`);
+      assert.ok(axial > 0, "axial drawing title, singular or plural");
+      const after = html.slice(axial, html.indexOf("</svg>", axial));
+      assert.ok(after.includes(`stroke="${col}"`), `${p.id} ${m.name}: axial drawing beam`);
+      for (const other of p.mountings) {
+        if (mountingColour(other.traverses) !== col) {
+          assert.ok(!after.includes(`stroke="${mountingColour(other.traverses)}"`), "no mix-up");
+        }
+      }
+    }
+  }
 });
