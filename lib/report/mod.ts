@@ -13,6 +13,7 @@ export {
   formatCompact,
   formatNumber,
   formatQuantity,
+  formatWithUncertainty,
   htmlPage,
   type HtmlPageOptions,
   markdownTable,

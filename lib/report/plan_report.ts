@@ -11,6 +11,7 @@ import {
   csvTable,
   escapeHtml,
   formatQuantity,
+  formatWithUncertainty,
   htmlPage,
   markdownTable,
   type TableCell,
@@ -78,7 +79,7 @@ function pointRows(p: SitePlan): (string | number)[][] {
     formatQuantity(o.meanVelocity, "m/s", 3),
     Number(o.reynolds.toPrecision(3)).toExponential(2),
     o.regime,
-    `${o.profileFactor.toFixed(4)} ± ${o.profileFactorSpread.toFixed(4)}`,
+    formatWithUncertainty(o.profileFactor, o.profileFactorSpread, ""),
   ]);
 }
 
@@ -202,11 +203,9 @@ export function planText(p: SitePlan): string {
   out.push(
     `fluid  ${p.fluid.name} at ${formatQuantity(p.fluid.temperature, "degC", 3)}, ${
       formatQuantity(p.fluid.pressure, "bar", 3)
-    } abs: c ${formatQuantity(p.fluid.soundSpeed, "m/s", 5)} (± ${
-      p.fluid.soundSpeedSpread.toFixed(1)
-    }), ρ ${formatQuantity(p.fluid.density, "kg/m^3", 4)}, ν ${
-      formatQuantity(p.fluid.kinematicViscosity, "mm^2/s", 3)
-    }`,
+    } abs: c ${formatWithUncertainty(p.fluid.soundSpeed, p.fluid.soundSpeedSpread, "m/s")}, ρ ${
+      formatQuantity(p.fluid.density, "kg/m^3", 4)
+    }, ν ${formatQuantity(p.fluid.kinematicViscosity, "mm^2/s", 3)}`,
   );
   out.push(
     `wedge  ${formatQuantity(p.transducer.wedgeSoundSpeed, "m/s", 4)} at ${
@@ -246,8 +245,8 @@ export function planText(p: SitePlan): string {
         `${formatQuantity(r.recommendedPosition, "m", 3)} at ${
           (r.recommendedOrientation * DEG).toFixed(0)
         }°; ` +
-        `estimated profile error ${pct(r.estimatedProfileError, 2)} ± ${
-          pct(r.estimatedProfileErrorSpread, 2)
+        `estimated profile error ${
+          formatWithUncertainty(r.estimatedProfileError, r.estimatedProfileErrorSpread, "%")
         } (an estimate)`,
     );
     out.push(sketchRun(p));
@@ -313,7 +312,7 @@ export function planMarkdown(p: SitePlan): string {
     ["wall thickness", mm(p.pipe.wallThickness, 3)],
     ["bore", mm(p.pipe.boreDiameter)],
     ["liquid", `${p.fluid.name}, ${formatQuantity(p.fluid.temperature, "degC", 3)}`],
-    ["sound speed", formatQuantity(p.fluid.soundSpeed, "m/s", 5)],
+    ["sound speed", formatWithUncertainty(p.fluid.soundSpeed, p.fluid.soundSpeedSpread, "m/s")],
     ["density", formatQuantity(p.fluid.density, "kg/m^3", 4)],
     ["kinematic viscosity", formatQuantity(p.fluid.kinematicViscosity, "mm^2/s", 3)],
   ]));
@@ -464,7 +463,7 @@ function htmlHeadAndPipe(p: SitePlan, b: string[]): void {
       p.pipe.lining.map((l) => `${l.material} ${mm(l.thickness, 2)}`).join(", ") || "none",
     ],
     ["liquid", `${p.fluid.name} at ${formatQuantity(p.fluid.temperature, "degC", 3)}`],
-    ["sound speed", formatQuantity(p.fluid.soundSpeed, "m/s", 5)],
+    ["sound speed", formatWithUncertainty(p.fluid.soundSpeed, p.fluid.soundSpeedSpread, "m/s")],
     ["kinematic viscosity", formatQuantity(p.fluid.kinematicViscosity, "mm^2/s", 3)],
   ]));
 }
@@ -547,8 +546,8 @@ function htmlStraightRun(p: SitePlan, b: string[]): void {
             formatQuantity(r.commonPracticePosition, "m", 3)
           }; model-ranked position ${
             formatQuantity(r.recommendedPosition, "m", 3)
-          }. Estimated profile error ${pct(r.estimatedProfileError, 2)} ± ${
-            pct(r.estimatedProfileErrorSpread, 2)
+          }. Estimated profile error ${
+            formatWithUncertainty(r.estimatedProfileError, r.estimatedProfileErrorSpread, "%")
           }: an estimate from a model, not a calibration.`,
         )
       }</p>`,

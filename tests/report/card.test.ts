@@ -8,6 +8,7 @@ import { CHROMIUM, hasChromium, renderHtml } from "../_browser.ts";
 import {
   clockPosition,
   formatCard,
+  formatWithUncertainty,
   inchesSixteenths,
   jobCard,
   MOUNTING_COLOURS,
@@ -59,8 +60,8 @@ Deno.test("the card reads its figures from the plan, for every demo site", async
     assert.equal(c.deltaTMinimum, m.times.find((t) => t.label === "minimum")?.deltaT);
     assert.ok(c.window.min <= c.spacing && c.spacing <= c.window.max, "window holds the spacing");
     // Inch text within 1/32 in of the spacing.
-    const [w, f] = c.spacingInches.replace(" in", "").split(" ");
-    const inch = f ? Number(w) + eval(f) : (w.includes("/") ? eval(w) : Number(w));
+    const frac = (x: string) => x.split("/").map(Number).reduce((a, b) => a / b);
+    const inch = c.spacingInches.replace(" in", "").split(" ").map(frac).reduce((a, b) => a + b);
     assert.ok(Math.abs(inch * 0.0254 - c.spacing) <= 0.0254 / 32 + 1e-12, c.spacingInches);
     // Z puts the transducers on opposite ends of the plane, V and W on one end.
     if (m.traverses % 2) assert.notEqual(c.clock[0], c.clock[1]);
@@ -173,5 +174,24 @@ Deno.test("one colour per mounting, the same in the table, the drawings and the 
         }
       }
     }
+  }
+});
+
+Deno.test("precision follows the uncertainty (JCGM 100:2008 GUM 7.2.6 and example 7.2.2)", async () => {
+  // GUM 7.2.2: m_s = 100.021 47 g with u_c = 0.35 mg.
+  assert.equal(formatWithUncertainty(0.10002147, 0.35e-6, "g"), "100.02147 ± 0.00035 g");
+  // Two significant digits of the uncertainty (7.2.6), value to the same place.
+  assert.equal(formatWithUncertainty(2720.4, 40, "m/s"), "2720 ± 40 m/s");
+  assert.equal(formatWithUncertainty(1463.5245, 0.5433, "m/s"), "1463.52 ± 0.54 m/s");
+  assert.throws(() => formatWithUncertainty(1, -1, "m/s"));
+  // The reports show the liquid's sound speed as a range with matching digits.
+  for (const p of await demoPlans()) {
+    const s = formatWithUncertainty(p.fluid.soundSpeed, p.fluid.soundSpeedSpread, "m/s");
+    const [v, u] = s.replace(" m/s", "").split(" ± ");
+    const decimals = (x: string) => (x.split(".")[1] ?? "").length;
+    assert.equal(decimals(v), decimals(u), s);
+    assert.ok(u.replace(/^[0.]+/, "").replace(".", "").length <= 2, `${s}: two digits`);
+    assert.ok(planText(p).includes(s), `${p.id}: text report shows ${s}`);
+    assert.ok(planHtml(p).includes(s), `${p.id}: HTML report shows ${s}`);
   }
 });
