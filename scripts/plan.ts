@@ -19,6 +19,7 @@ import {
   planMarkdown,
   planText,
 } from "../lib/report/plan_report.ts";
+import { formatCard } from "../lib/report/card.ts";
 import { parseCli, runMain } from "./_cli.ts";
 
 const HELP = `
@@ -29,7 +30,7 @@ usage:
   plan SITE --readings READINGS.yaml [--format text|md|html|json]   reconcile site readings
 
 options:
-  --format F          text (default), json, md, html, csv (csv: the fleet summary)
+  --format F          text (default), json, md, html, csv (csv: the fleet summary), card
   --out PATH          write reports there instead of standard output; with several sites (or
                       html) PATH is a folder: one report per site plus index.html / summary.csv
   --monte-carlo       run the Monte Carlo check beside GUM (default with one site)
@@ -55,7 +56,7 @@ examples:
   deno task plan -- sites.csv --format csv --out out/fleet
 `;
 
-const FORMATS = ["text", "json", "md", "html", "csv"] as const;
+const FORMATS = ["text", "json", "md", "html", "csv", "card"] as const;
 type Format = typeof FORMATS[number];
 const EXT: Record<Format, string> = {
   text: "txt",
@@ -63,6 +64,7 @@ const EXT: Record<Format, string> = {
   md: "md",
   html: "html",
   csv: "csv",
+  card: "card.html",
 };
 
 const madeDirs = new Set<string>();
@@ -328,6 +330,8 @@ function render(plan: SitePlan, format: Format): string {
       return planHtml(plan);
     case "csv":
       return fleetCsv([fleetRow(plan)]);
+    case "card":
+      return formatCard(plan, { format: "html" });
     default:
       return planText(plan);
   }

@@ -33,6 +33,33 @@ const BEAM = "#1b5e8c";
 const TRANSDUCER_FILL = "#4a4a4a";
 const ACCENT = "#8a1c1c";
 
+/**
+ * The project's own colour for each mounting, used alike in tables, drawings and charts:
+ * Z teal, V raspberry, N violet, W amber; other traverse counts slate.
+ */
+export const MOUNTING_COLOURS: Readonly<Record<string, string>> = Object.freeze({
+  Z: "#0e7c66",
+  V: "#b8336a",
+  N: "#5b4fa8",
+  W: "#c07a00",
+});
+
+/**
+ * Colour of a mounting by its number of traverses ({@link MOUNTING_COLOURS}; slate otherwise).
+ *
+ * @param traverses bore crossings (1 Z, 2 V, 4 W)
+ * @returns a CSS hex colour
+ *
+ * @example
+ * ```ts
+ * import { mountingColour, MOUNTING_COLOURS } from "./drawings.ts";
+ * if (mountingColour(2) !== MOUNTING_COLOURS.V) throw new Error();
+ * ```
+ */
+export function mountingColour(traverses: number): string {
+  return MOUNTING_COLOURS[mountingName(traverses)] ?? "#4f5b66";
+}
+
 /** Trade name of a mounting by its number of traverses (V, Z, W; others by count). */
 export function mountingName(traverses: number): string {
   return traverses === 1
@@ -100,6 +127,14 @@ export interface PipeSectionOptions {
   readonly fluidAngle: number;
   /** Number of acoustic paths (beam planes), evenly turned about the axis (default 1). */
   readonly paths?: number;
+  /**
+   * Angle of the (first) path plane from the vertical, rad, counted clockwise looking
+   * downstream (default 0: vertical, transducers at the top). When given, the transducer labels
+   * carry their clock positions and the notes state the viewing direction.
+   */
+  readonly pathPlane?: number;
+  /** Clock-position text per transducer end (first end, opposite end), e.g. ["3:00", "9:00"]. */
+  readonly clock?: readonly [string, string];
   /** Display unit of lengths (default "mm"). */
   readonly unit?: string;
   /** Title (default "Pipe cross-section"). */
@@ -134,6 +169,7 @@ export function svgPipeSection(o: PipeSectionOptions): string {
   if (!Number.isInteger(paths) || paths < 1 || paths > 8) {
     throw new InputError("paths", String(paths), "an integer from 1 to 8");
   }
+  const beam = mountingColour(n);
   const unit = o.unit ?? "mm";
   const title = o.title ?? "Pipe cross-section";
   const W = 700, H = 520, cx = 260, cy = 250, R = 150;
@@ -159,19 +195,21 @@ export function svgPipeSection(o: PipeSectionOptions): string {
   // Centre mark.
   out += line(cx - 8, cy, cx + 8, cy, INK, 0.6) + line(cx, cy - 8, cx, cy + 8, INK, 0.6);
 
+  const plane = o.pathPlane === undefined ? 0 : finite("pathPlane", o.pathPlane);
   for (let p = 0; p < paths; p++) {
-    const a = -Math.PI / 2 + p * Math.PI / paths; // first plane vertical, transducers on top
+    // Screen y points down: clockwise from the top is (sin φ, −cos φ), i.e. a = φ − π/2.
+    const a = -Math.PI / 2 + plane + p * Math.PI / paths;
     const ux = Math.cos(a), uy = Math.sin(a);
     out += line(
       cx - ux * (R + 26),
       cy - uy * (R + 26),
       cx + ux * (R + 26),
       cy + uy * (R + 26),
-      BEAM,
+      beam,
       1,
       "6 4",
     );
-    out += line(cx - ux * rBore, cy - uy * rBore, cx + ux * rBore, cy + uy * rBore, BEAM, 2.2);
+    out += line(cx - ux * rBore, cy - uy * rBore, cx + ux * rBore, cy + uy * rBore, beam, 2.2);
     const sides = n % 2 === 1 ? [1, -1] : [1];
     for (const s of sides) {
       const px = cx + s * ux * (R + 7), py = cy + s * uy * (R + 7);
@@ -182,7 +220,8 @@ export function svgPipeSection(o: PipeSectionOptions): string {
         }" width="32" height="14" rx="2" fill="${TRANSDUCER_FILL}" ` +
         `transform="rotate(${c(deg)} ${c(px)} ${c(py)})"/>`;
       const lx = cx + s * ux * (R + 30), ly = cy + s * uy * (R + 34) + 4;
-      const label = n % 2 === 1 ? (s === 1 ? "T1" : "T2") : "T1, T2";
+      const base = n % 2 === 1 ? (s === 1 ? "T1" : "T2") : "T1, T2";
+      const label = o.clock && p === 0 ? `${base} at ${o.clock[s === 1 ? 0 : 1]}` : base;
       const anchor = lx < cx - 20 ? "end" : lx > cx + 20 ? "start" : "middle";
       out += text(lx, ly, paths > 1 ? `${label} (path ${p + 1})` : label, { anchor, size: 13 });
     }
@@ -199,6 +238,9 @@ export function svgPipeSection(o: PipeSectionOptions): string {
     `bore ${q(b.id, unit)}`,
     `${mountingName(n)} mounting, ${n} traverse${n > 1 ? "s" : ""}`,
     `beam in a diametral plane`,
+    ...(o.pathPlane !== undefined
+      ? [`plane ${q(plane, "deg", 3)} from vertical`, "seen looking downstream"]
+      : []),
     `fluid angle ${q(theta, "deg", 3)}`,
     ...(paths > 1 ? [`${paths} paths`] : []),
     ...(exaggerated ? ["wall/lining widened to be seen"] : []),
@@ -224,7 +266,7 @@ export function svgPipeSection(o: PipeSectionOptions): string {
   out += sw(ly, WALL_FILL, "wall");
   if (b.lining > 0) out += sw(ly += 18, LINING_FILL, "lining");
   out += sw(ly += 18, FLUID_FILL, "liquid");
-  out += line(xNote, (ly += 18) - 4, xNote + 14, ly - 4, BEAM, 2.2) +
+  out += line(xNote, (ly += 18) - 4, xNote + 14, ly - 4, beam, 2.2) +
     text(xNote + 20, ly, "beam", { size: 12 });
   return svgDocument(
     W,
@@ -357,10 +399,13 @@ export function svgAxialPath(o: AxialPathOptions): string {
   // Axis.
   out += line(x0, (top + yb) / 2, x1, (top + yb) / 2, "#8c8c8c", 0.8, "14 4 2 4");
   // Beam.
-  out += `<polyline points="${points(pts.map(([px, py]) => [X(px), Y(py)]))}" stroke="${BEAM}" ` +
+  out +=
+    `<polyline points="${points(pts.map(([px, py]) => [X(px), Y(py)]))}" stroke="${
+      mountingColour(n)
+    }" ` +
     `stroke-width="2.2" stroke-linejoin="round"/>`;
   for (const [px, py] of [pts[0], pts[pts.length - 1]]) {
-    out += `<circle cx="${c(X(px))}" cy="${c(Y(py))}" r="3" fill="${BEAM}"/>`;
+    out += `<circle cx="${c(X(px))}" cy="${c(Y(py))}" r="3" fill="${mountingColour(n)}"/>`;
   }
   // Transducers: the front face is slanted towards the other transducer.
   const transducer = (xm: number, onTop: boolean, facing: 1 | -1, label: string) => {

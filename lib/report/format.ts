@@ -367,3 +367,43 @@ export function htmlPage(options: HtmlPageOptions): string {
     "",
   ].join("\n");
 }
+
+/**
+ * A value with its uncertainty as the range it is, `v ± u unit`, rounded as GUM 7.2.6 advises:
+ * the uncertainty to two significant digits, the value to the same last decimal place. Both
+ * are given in SI and shown in `unit`.
+ *
+ * Source: JCGM 100:2008 (GUM), 7.2.6 (at most two significant digits for the uncertainty) and
+ * the example of 7.2.2 (100.021 47 g with u = 0.35 mg).
+ *
+ * @param value the value, SI (finite)
+ * @param uncertainty its standard uncertainty or half-width, SI (finite, ≥ 0)
+ * @param unit display unit (as {@link formatQuantity})
+ * @returns e.g. "1463.5 ± 0.54 m/s"; a zero uncertainty gives the value to 6 digits
+ * @throws {InputError} on non-finite value or a negative or non-finite uncertainty
+ *
+ * @example
+ * ```ts
+ * import { formatWithUncertainty } from "./format.ts";
+ * const s = formatWithUncertainty(0.10002147, 0.00000035, "g");
+ * if (s !== "100.02147 ± 0.00035 g") throw new Error(s);
+ * ```
+ */
+export function formatWithUncertainty(value: number, uncertainty: number, unit: string): string {
+  if (typeof value !== "number" || !Number.isFinite(value)) {
+    throw new InputError("value", String(value), "a finite number (SI)");
+  }
+  if (!(Number.isFinite(uncertainty) && uncertainty >= 0)) {
+    throw new InputError("uncertainty", String(uncertainty), "a finite number ≥ 0 (SI)");
+  }
+  const x = toUnit(value, unit, 17);
+  const u = uncertainty === 0 ? 0 : toUnit(value + uncertainty, unit, 17) - x;
+  const shown = displayUnit(unit);
+  const tail = shown === "°" ? "°" : shown === "" ? "" : ` ${shown}`;
+  if (u === 0) return `${formatNumber(x, 6)}${tail}`;
+  const exp = Math.floor(Math.log10(Math.abs(u))) - 1; // last kept decimal exponent
+  const dec = Math.max(0, -exp);
+  const step = 10 ** exp;
+  const r = (v: number) => (Math.round(v / step) * step).toFixed(dec);
+  return `${r(x)} ± ${r(u)}${tail}`;
+}

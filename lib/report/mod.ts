@@ -13,6 +13,7 @@ export {
   formatCompact,
   formatNumber,
   formatQuantity,
+  formatWithUncertainty,
   htmlPage,
   type HtmlPageOptions,
   markdownTable,
@@ -31,6 +32,8 @@ export {
 } from "./svg.ts";
 export {
   type AxialPathOptions,
+  MOUNTING_COLOURS,
+  mountingColour,
   type PipeSectionOptions,
   type RunOptions,
   svgAxialPath,
@@ -38,3 +41,14 @@ export {
   svgRun,
 } from "./drawings.ts";
 export * from "./plan_report.ts";
+export {
+  CARD_CSS,
+  CARD_SAFETY,
+  type CardOptions,
+  clockPosition,
+  formatCard,
+  inchesSixteenths,
+  type JobCard,
+  jobCard,
+  jobCardHtml,
+} from "./card.ts";

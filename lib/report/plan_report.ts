@@ -11,14 +11,19 @@ import {
   csvTable,
   escapeHtml,
   formatQuantity,
+  formatWithUncertainty,
   htmlPage,
   markdownTable,
+  type TableCell,
   textTable,
 } from "./format.ts";
-import { svgAxialPath, svgPipeSection, svgRun } from "./drawings.ts";
+import { mountingColour, svgAxialPath, svgPipeSection, svgRun } from "./drawings.ts";
+import { CARD_CSS, formatCard, jobCard, jobCardHtml } from "./card.ts";
 import { svgBarChart, svgLineChart } from "./svg.ts";
 
 const DEG = 180 / Math.PI;
+/** "1 traverse", "2 traverses". */
+const traverseWord = (n: number) => `${n} traverse${n === 1 ? "" : "s"}`;
 const pct = (x: number, d = 3) => `${Number((x * 100).toPrecision(d))} %`;
 const mm = (x: number, d = 4) => formatQuantity(x, "mm", d);
 
@@ -74,7 +79,7 @@ function pointRows(p: SitePlan): (string | number)[][] {
     formatQuantity(o.meanVelocity, "m/s", 3),
     Number(o.reynolds.toPrecision(3)).toExponential(2),
     o.regime,
-    `${o.profileFactor.toFixed(4)} ± ${o.profileFactorSpread.toFixed(4)}`,
+    formatWithUncertainty(o.profileFactor, o.profileFactorSpread, ""),
   ]);
 }
 
@@ -112,6 +117,55 @@ function traceRows(p: SitePlan | Reconciliation): (string | number)[][] {
 
 const TRACE_HEADERS = ["quantity", "value", "unit", "source", "basis"];
 
+/** Text-report width limit, columns. */
+export const TEXT_WIDTH = 100;
+
+/**
+ * A text table within {@link TEXT_WIDTH} columns: when the whole table is wider, its columns are
+ * split into groups (the first column repeated in each), one table per group.
+ */
+function fitTable(headers: readonly string[], rows: readonly (readonly TableCell[])[]): string {
+  const whole = textTable(headers, rows);
+  if (whole.split("\n").every((l) => l.length <= TEXT_WIDTH)) return whole;
+  const col = (j: number) => headers.map((_, k) => k).filter((k) => k === 0 || k === j);
+  const groups: number[][] = [];
+  let cur: number[] = [0];
+  for (let j = 1; j < headers.length; j++) {
+    const tryCols = [...cur, j];
+    const t = textTable(tryCols.map((k) => headers[k]), rows.map((r) => tryCols.map((k) => r[k])));
+    if (cur.length > 1 && t.split("\n").some((l) => l.length > TEXT_WIDTH)) {
+      groups.push(cur);
+      cur = col(j);
+    } else cur = tryCols;
+  }
+  groups.push(cur);
+  return groups.map((g) => textTable(g.map((k) => headers[k]), rows.map((r) => g.map((k) => r[k]))))
+    .join("\n\n");
+}
+
+/** Wrap prose lines longer than {@link TEXT_WIDTH}, continuing under their own indent. */
+function fitLines(text: string): string {
+  const out: string[] = [];
+  for (const l of text.split("\n")) {
+    if (l.length <= TEXT_WIDTH) {
+      out.push(l);
+      continue;
+    }
+    const lead = /^(\s*(?:- )?)/.exec(l)![1];
+    const indent = " ".repeat(lead.length + 2);
+    let line = "";
+    for (const w of l.slice(lead.length).split(" ")) {
+      const cand = line ? `${line} ${w}` : lead + w;
+      if (line && cand.length > TEXT_WIDTH) {
+        out.push(line);
+        line = indent + w;
+      } else line = cand;
+    }
+    out.push(line);
+  }
+  return out.join("\n");
+}
+
 /**
  * The plan as terminal text.
  *
@@ -134,7 +188,7 @@ const TRACE_HEADERS = ["quantity", "value", "unit", "source", "basis"];
  * ```
  */
 export function planText(p: SitePlan): string {
-  const out: string[] = [];
+  const out: string[] = [formatCard(p), ""];
   out.push(`${p.name}${p.invented ? "  [invented scenario]" : ""}`);
   out.push(`registry ${p.registryHash}`);
   out.push("");
@@ -149,11 +203,9 @@ export function planText(p: SitePlan): string {
   out.push(
     `fluid  ${p.fluid.name} at ${formatQuantity(p.fluid.temperature, "degC", 3)}, ${
       formatQuantity(p.fluid.pressure, "bar", 3)
-    } abs: c ${formatQuantity(p.fluid.soundSpeed, "m/s", 5)} (± ${
-      p.fluid.soundSpeedSpread.toFixed(1)
-    }), ρ ${formatQuantity(p.fluid.density, "kg/m^3", 4)}, ν ${
-      formatQuantity(p.fluid.kinematicViscosity, "mm^2/s", 3)
-    }`,
+    } abs: c ${formatWithUncertainty(p.fluid.soundSpeed, p.fluid.soundSpeedSpread, "m/s")}, ρ ${
+      formatQuantity(p.fluid.density, "kg/m^3", 4)
+    }, ν ${formatQuantity(p.fluid.kinematicViscosity, "mm^2/s", 3)}`,
   );
   out.push(
     `wedge  ${formatQuantity(p.transducer.wedgeSoundSpeed, "m/s", 4)} at ${
@@ -166,12 +218,12 @@ export function planText(p: SitePlan): string {
   out.push(
     `recommended mounting: ${
       p.mountings.find((m) => m.traverses === p.recommendedMounting)?.name
-    } (${p.recommendedMounting} traverses)`,
+    } (${traverseWord(p.recommendedMounting)})`,
   );
   out.push("");
-  out.push(textTable(MOUNTING_HEADERS, mountingRows(p)));
+  out.push(fitTable(MOUNTING_HEADERS, mountingRows(p)));
   out.push("");
-  out.push(textTable(POINT_HEADERS, pointRows(p)));
+  out.push(fitTable(POINT_HEADERS, pointRows(p)));
   out.push(`profile factor changes by ${pct(p.profileFactorChange)} across the flow range`);
   if (p.straightRun) {
     const r = p.straightRun;
@@ -193,8 +245,8 @@ export function planText(p: SitePlan): string {
         `${formatQuantity(r.recommendedPosition, "m", 3)} at ${
           (r.recommendedOrientation * DEG).toFixed(0)
         }°; ` +
-        `estimated profile error ${pct(r.estimatedProfileError, 2)} ± ${
-          pct(r.estimatedProfileErrorSpread, 2)
+        `estimated profile error ${
+          formatWithUncertainty(r.estimatedProfileError, r.estimatedProfileErrorSpread, "%")
         } (an estimate)`,
     );
     out.push(sketchRun(p));
@@ -213,7 +265,7 @@ export function planText(p: SitePlan): string {
         } (${p.uncertainty.monteCarlo.draws} draws, 95 %)`
         : ""),
   );
-  out.push(textTable(BUDGET_HEADERS, budgetRows(p)));
+  out.push(fitTable(BUDGET_HEADERS, budgetRows(p)));
   out.push("");
   out.push("cautions:");
   for (const c of p.cautions) out.push(`  - ${c}`);
@@ -223,8 +275,8 @@ export function planText(p: SitePlan): string {
   }
   out.push("");
   out.push(`trace (${p.trace.length} entries):`);
-  out.push(textTable(TRACE_HEADERS, traceRows(p)));
-  return out.join("\n") + "\n";
+  out.push(fitTable(TRACE_HEADERS, traceRows(p)));
+  return fitLines(out.join("\n")) + "\n";
 }
 
 /** An ASCII sketch of the run: fittings, the requirement zones and the chosen position. */
@@ -248,7 +300,7 @@ function sketchRun(p: SitePlan): string {
  */
 export function planMarkdown(p: SitePlan): string {
   const out: string[] = [];
-  out.push(`# ${p.name}`);
+  out.push(`# ${p.name}`, "", formatCard(p, { format: "md" }), "");
   if (p.invented) out.push("\n*Invented scenario: no figure here describes a real installation.*");
   out.push(`\nRegistry hash: \`${p.registryHash}\`\n`);
   out.push(`**Verdict:** ${verdictLine(p)}`);
@@ -260,7 +312,7 @@ export function planMarkdown(p: SitePlan): string {
     ["wall thickness", mm(p.pipe.wallThickness, 3)],
     ["bore", mm(p.pipe.boreDiameter)],
     ["liquid", `${p.fluid.name}, ${formatQuantity(p.fluid.temperature, "degC", 3)}`],
-    ["sound speed", formatQuantity(p.fluid.soundSpeed, "m/s", 5)],
+    ["sound speed", formatWithUncertainty(p.fluid.soundSpeed, p.fluid.soundSpeedSpread, "m/s")],
     ["density", formatQuantity(p.fluid.density, "kg/m^3", 4)],
     ["kinematic viscosity", formatQuantity(p.fluid.kinematicViscosity, "mm^2/s", 3)],
   ]));
@@ -384,17 +436,10 @@ function htmlTable(
     "</tbody></table>";
 }
 
-/**
- * The plan as a self-contained HTML page with inline SVG drawings: the pipe in section and along
- * its axis with the beam path for each mounting, the run with its fittings and positions, the
- * estimated profile error along the run, spacing against temperature, and the budget as bars.
- *
- * @param p a plan
- * @returns HTML text that opens offline
- */
-export function planHtml(p: SitePlan): string {
-  const b: string[] = [];
+/** HTML report part: title, verdict and the pipe-and-liquid table. */
+function htmlHeadAndPipe(p: SitePlan, b: string[]): void {
   b.push(`<h1>${escapeHtml(p.name)}</h1>`);
+  b.push(jobCardHtml(p));
   if (p.invented) {
     b.push(`<p><em>Invented scenario: no figure here describes a real installation.</em></p>`);
   }
@@ -418,14 +463,26 @@ export function planHtml(p: SitePlan): string {
       p.pipe.lining.map((l) => `${l.material} ${mm(l.thickness, 2)}`).join(", ") || "none",
     ],
     ["liquid", `${p.fluid.name} at ${formatQuantity(p.fluid.temperature, "degC", 3)}`],
-    ["sound speed", formatQuantity(p.fluid.soundSpeed, "m/s", 5)],
+    ["sound speed", formatWithUncertainty(p.fluid.soundSpeed, p.fluid.soundSpeedSpread, "m/s")],
     ["kinematic viscosity", formatQuantity(p.fluid.kinematicViscosity, "mm^2/s", 3)],
   ]));
+}
+
+/** HTML report part: the mounting table and drawings. */
+function htmlMountings(p: SitePlan, b: string[]): void {
   b.push(`<h2>Mountings</h2>`);
-  b.push(htmlTable(MOUNTING_HEADERS, mountingRows(p)));
+  b.push(
+    htmlTable(MOUNTING_HEADERS, mountingRows(p)).replace(
+      /<tr><td>([A-Z][\w-]*) \((\d+)\)<\/td>/g,
+      (_, name, n) =>
+        `<tr><td><svg width="12" height="12" aria-hidden="true"><rect width="12" height="12" ` +
+        `fill="${mountingColour(Number(n))}"/></svg> ${name} (${n})</td>`,
+    ),
+  );
   const lin = p.pipe.lining.reduce((s, l) => s + l.thickness, 0);
   b.push(`<div class="grid">`);
   const rec = p.mountings.find((m) => m.traverses === p.recommendedMounting)!;
+  const card = jobCard(p);
   b.push(`<figure>${
     svgPipeSection({
       outsideDiameter: p.pipe.outsideDiameter,
@@ -433,6 +490,8 @@ export function planHtml(p: SitePlan): string {
       liningThickness: lin || undefined,
       traverses: rec.traverses,
       fluidAngle: rec.fluidAngle,
+      pathPlane: card.pathPlane,
+      clock: card.clock,
       title: `Cross-section, ${rec.name} mounting`,
     })
   }</figure>`);
@@ -447,7 +506,7 @@ export function planHtml(p: SitePlan): string {
         fluidAngle: m.fluidAngle,
         wallAngle: m.wallAngle,
         liningAngle: m.liningAngles[0],
-        title: `${m.name} mounting (${m.traverses} traverses): spacing ${mm(m.spacing)}`,
+        title: `${m.name} mounting (${traverseWord(m.traverses)}): spacing ${mm(m.spacing)}`,
       })
     }</figure>`);
   }
@@ -461,6 +520,7 @@ export function planHtml(p: SitePlan): string {
         yLabel: "spacing (mm)",
         series: temps.map((m) => ({
           name: `${m.name} mounting`,
+          colour: mountingColour(m.traverses),
           points: m.overTemperature!.map((r) =>
             [r.temperature - 273.15, r.spacing * 1000] as const
           ),
@@ -468,6 +528,10 @@ export function planHtml(p: SitePlan): string {
       })
     }</figure>`);
   }
+}
+
+/** HTML report part: operating points and the straight-run section. */
+function htmlStraightRun(p: SitePlan, b: string[]): void {
   b.push(`<h2>Operating points</h2>`);
   b.push(htmlTable(POINT_HEADERS, pointRows(p)));
   if (p.straightRun) {
@@ -482,8 +546,8 @@ export function planHtml(p: SitePlan): string {
             formatQuantity(r.commonPracticePosition, "m", 3)
           }; model-ranked position ${
             formatQuantity(r.recommendedPosition, "m", 3)
-          }. Estimated profile error ${pct(r.estimatedProfileError, 2)} ± ${
-            pct(r.estimatedProfileErrorSpread, 2)
+          }. Estimated profile error ${
+            formatWithUncertainty(r.estimatedProfileError, r.estimatedProfileErrorSpread, "%")
           }: an estimate from a model, not a calibration.`,
         )
       }</p>`,
@@ -514,6 +578,10 @@ export function planHtml(p: SitePlan): string {
       })
     }</figure>`);
   }
+}
+
+/** HTML report part: uncertainty, cautions, warnings and trace. */
+function htmlBudgetAndTrace(p: SitePlan, b: string[]): void {
   b.push(`<h2>Uncertainty budget</h2>`);
   b.push(
     `<p>${
@@ -553,7 +621,23 @@ export function planHtml(p: SitePlan): string {
   }
   b.push(`<h2>Trace</h2>`);
   b.push(htmlTable(TRACE_HEADERS, traceRows(p)));
-  return htmlPage({ title: p.name, body: b.join("\n"), css: EXTRA_CSS });
+}
+
+/**
+ * The plan as a self-contained HTML page with inline SVG drawings: the pipe in section and along
+ * its axis with the beam path for each mounting, the run with its fittings and positions, the
+ * estimated profile error along the run, spacing against temperature, and the budget as bars.
+ *
+ * @param p a plan
+ * @returns HTML text that opens offline
+ */
+export function planHtml(p: SitePlan): string {
+  const b: string[] = [];
+  htmlHeadAndPipe(p, b);
+  htmlMountings(p, b);
+  htmlStraightRun(p, b);
+  htmlBudgetAndTrace(p, b);
+  return htmlPage({ title: p.name, body: b.join("\n"), css: EXTRA_CSS + CARD_CSS });
 }
 
 /**

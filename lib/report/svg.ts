@@ -185,6 +185,8 @@ export interface LineSeries {
   readonly name: string;
   /** Points [x, y] in display units, in drawing order. */
   readonly points: readonly (readonly [number, number])[];
+  /** Line colour (CSS); default from the chart palette by series index. */
+  readonly colour?: string;
 }
 
 /** Arguments of {@link svgLineChart}. */
@@ -294,7 +296,7 @@ export function svgLineChart(options: LineChartOptions): string {
       text(X(v.x) + 4, top + 12, v.label, { size: 11, fill: "#8a1c1c" });
   }
   series.forEach((s, i) => {
-    const col = PALETTE[i % PALETTE.length], dash = DASHES[i % DASHES.length];
+    const col = s.colour ?? PALETTE[i % PALETTE.length], dash = DASHES[i % DASHES.length];
     const pts = s.points.map(([x, y]) => [X(x), Y(y)] as [number, number]);
     out += `<polyline points="${points(pts)}" stroke="${col}" stroke-width="2"` +
       (dash ? ` stroke-dasharray="${dash}"` : "") + ` stroke-linejoin="round"/>`;
