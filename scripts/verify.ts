@@ -9,6 +9,7 @@ import { defaultRegistry } from "../lib/registry/mod.ts";
 import { verifyWaterTable, WATER_VERIFICATION_TABLES } from "../lib/water/mod.ts";
 import { SEAWATER_VERIFICATION_FORMULATIONS, verifySeawaterTable } from "../lib/liquids/mod.ts";
 import { parseCli, runMain } from "./_cli.ts";
+import { checkInstallationData, type InstallationCheck } from "../lib/installation/published.ts";
 
 const HELP = `
 verify — run the published verification tables of the registry against this toolkit's code
@@ -17,12 +18,16 @@ Usage:
   deno task verify [--table ID] [--all-rows] [--strict] [--json]
 
 Options:
-  --table ID     run one table only (repeatable)
+  --table ID     run one table only (repeatable; skips the installation section)
   --all-rows     print every checked value, not only the worst of each table and the failures
   --strict       also fail when a table has no evaluating code
   --json         machine-readable output (every check)
   --debug        stack trace on errors
   -h, --help     this help
+
+Installation section: the distorted-profile model against each published point on readings
+behind a single bend (data/installation/), pass when inside the published bounds or outside by
+no more than the model's stated spread.
 
 Exit codes: 0 every check within its table's tolerance, 1 a check failed (or, with --strict, a
 table could not be run), 2 bad input.
@@ -92,8 +97,13 @@ runMain(() => {
   const notRun = results.filter((r) => r.status === "not run").length;
   const nChecks = results.reduce((a, r) => a + r.checks.length, 0);
   const nFailedChecks = results.reduce((a, r) => a + r.checks.filter((c) => !c.ok).length, 0);
+  // --- installation section: the distorted-profile model against published data ----------
+  const inst: InstallationCheck[] = wanted?.length ? [] : checkInstallationData();
+  const instFailed = inst.filter((c) => !c.ok).length;
   if (values.json) {
-    console.log(JSON.stringify({ registryHash: reg.hash, tables: results }, null, 2));
+    console.log(
+      JSON.stringify({ registryHash: reg.hash, tables: results, installation: inst }, null, 2),
+    );
   } else {
     console.log(`registry ${reg.hash.slice(0, 16)}…: ${results.length} verification tables`);
     for (const r of results) {
@@ -126,6 +136,38 @@ runMain(() => {
       `\n${nChecks - nFailedChecks} passed, ${nFailedChecks} failed` +
         (notRun ? ` (${notRun} tables not run)` : ""),
     );
+    if (inst.length) printInstallation(inst, values["all-rows"] === true);
   }
-  return failed > 0 || (values.strict && notRun > 0) ? 1 : 0;
+  return failed > 0 || instFailed > 0 || (values.strict && notRun > 0) ? 1 : 0;
 });
+
+/** Installation section: one line per published statement (worst point), failures in full. */
+function printInstallation(checks: InstallationCheck[], all: boolean): void {
+  const deg = (o: number) => Number.isNaN(o) ? "all angles" : `${Math.round(o * 180 / Math.PI)}°`;
+  const line = (c: InstallationCheck) =>
+    `        ${c.ok ? "pass" : "FAIL"} ${c.distanceDiameters} D ${deg(c.orientation)} ` +
+    `traverses ${c.traverses}${Number.isNaN(c.reynolds) ? "" : ` Re ${c.reynolds}`}: model ${
+      c.model.toFixed(5)
+    } bounds [${c.low}, ${c.high}] deviation ${c.deviation.toExponential(2)} spread ${
+      c.spread.toExponential(2)
+    }`;
+  console.log(`\ninstallation model against published data: ${checks.length} checks`);
+  const groups = new Map<string, InstallationCheck[]>();
+  for (const c of checks) {
+    const k = `${c.table} [source ${c.source}] ${c.statement}`;
+    groups.set(k, [...(groups.get(k) ?? []), c]);
+  }
+  for (const [k, g] of groups) {
+    const bad = g.filter((c) => !c.ok);
+    // closest to its bounds (a point outside them counts as a negative margin)
+    const margin = (c: InstallationCheck) =>
+      c.deviation > 0 ? -c.deviation : Math.min(c.model - c.low, c.high - c.model);
+    const worst = g.reduce((a, c) => (margin(c) < margin(a) ? c : a));
+    console.log(
+      `\n${(bad.length ? "FAIL" : "PASS").padEnd(7)} ${k}: ${g.length} points; nearest its bounds:`,
+    );
+    for (const c of all ? g : [...new Set([worst, ...bad])]) console.log(line(c));
+  }
+  const nBad = checks.filter((c) => !c.ok).length;
+  console.log(`\n${checks.length - nBad} passed, ${nBad} failed (installation)`);
+}

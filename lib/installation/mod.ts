@@ -28,14 +28,25 @@ export {
 export {
   DEFAULT_FLUID_ANGLE,
   type ErrorComponents,
+  JUDGEMENT_RELATIVE_SPREAD,
   MODEL_NOTE,
   MODEL_RELATIVE_SPREAD,
+  type ModelProvenance,
+  modelProvenance,
   profileErrorEstimate,
   type ProfileErrorInput,
   type ProfileErrorResult,
   profileErrorSweep,
   type SweepRow,
 } from "./model.ts";
+export {
+  CHECK_ANGLES,
+  CHECK_TRAVERSES,
+  checkDistances,
+  checkInstallationData,
+  type InstallationCheck,
+  INSTALLATION_DATA_TABLES,
+} from "./published.ts";
 export {
   DEFAULT_PATH_ORIENTATIONS,
   type RankedPosition,

@@ -40,13 +40,59 @@ import { type Fitting, resolveFitting } from "./fittings.ts";
 /** Default beam angle in the liquid from the wall normal, rad (20°, common practice). */
 export const DEFAULT_FLUID_ANGLE = 20 * Math.PI / 180;
 
-/** Judgement on the model: the spread reported is this fraction of the estimated error. */
+/**
+ * Spread of a fitted fitting (terms fitted to published data, basis `computed`): this fraction of
+ * the estimated error. Judgement: the published bounds it is fitted to (synowiec-2021-abstract)
+ * give the envelope, not the value at every angle.
+ */
 export const MODEL_RELATIVE_SPREAD = 0.5;
+
+/**
+ * Spread of a fitting whose terms are engineering judgement (basis `recalled`, no published
+ * measurements reached): this fraction of the estimated error, wider because the data are absent.
+ */
+export const JUDGEMENT_RELATIVE_SPREAD = 1.0;
 
 /** The note every model result carries. */
 export const MODEL_NOTE: string = "estimate from the snellpath distorted-profile model (simple, " +
   "exponentially decaying components; only the single-elbow terms are fitted to published " +
-  "magnitudes); not a calibration";
+  "bounds); not a calibration";
+
+/** Where a fitting's model terms come from: source id and basis, for traces and budgets. */
+export interface ModelProvenance {
+  /** Source id in data/sources.yaml. */
+  readonly source: string;
+  /** `computed` (fitted to published data) or `recalled` (engineering judgement). */
+  readonly basis: "transcribed" | "computed" | "common-practice" | "recalled";
+  /** Relative spread applied to this fitting's estimates. */
+  readonly relativeSpread: number;
+}
+
+/**
+ * Provenance of a fitting's distorted-profile terms, read from its `disturbance` entry in
+ * data/fittings.yaml: for the single elbow the published data it is fitted to
+ * (`synowiec-2021-abstract`, basis computed, spread {@link MODEL_RELATIVE_SPREAD}); for the
+ * others `snellpath-installation-model`, basis recalled, spread {@link JUDGEMENT_RELATIVE_SPREAD}.
+ *
+ * @param fitting fitting id, alias or entry
+ * @returns source id, basis and the relative spread used
+ *
+ * @example
+ * ```ts
+ * import { modelProvenance } from "./model.ts";
+ * if (modelProvenance("elbow-90").source !== "synowiec-2021-abstract") throw new Error();
+ * if (modelProvenance("pump").basis !== "recalled") throw new Error();
+ * ```
+ */
+export function modelProvenance(fitting: string | Fitting): ModelProvenance {
+  const d = resolveFitting(fitting).disturbance;
+  const basis = d.basis ?? "recalled";
+  return Object.freeze({
+    source: d.source ?? "snellpath-installation-model",
+    basis,
+    relativeSpread: basis === "recalled" ? JUDGEMENT_RELATIVE_SPREAD : MODEL_RELATIVE_SPREAD,
+  });
+}
 
 const RULE = halfChordRule(24);
 
@@ -90,8 +136,15 @@ export interface ErrorComponents {
 export interface ProfileErrorResult {
   /** Estimated relative error of the reading (reading/true − 1); negative reads low. */
   readonly error: number;
-  /** Half-width of the model's own uncertainty on `error` (judgement: 50 % of it). */
+  /**
+   * Half-width of the model's own uncertainty on `error`: 50 % of it for a fitting fitted to
+   * published data, 100 % for one resting on judgement ({@link modelProvenance}).
+   */
   readonly spread: number;
+  /** Source id of the model terms used (data/sources.yaml). */
+  readonly source: string;
+  /** Basis of the model terms used. */
+  readonly basis: ModelProvenance["basis"];
   /** Per component. */
   readonly components: ErrorComponents;
   /** Fully developed profile factor the meter applies. */
@@ -117,8 +170,9 @@ function amp(c: { amplitude: number; decay: number }, x: number): number {
 /**
  * Estimated relative error of a clamp-on transit-time reading at a distance behind a fitting,
  * by the snellpath distorted-profile model (see the module text). Sources: model parameters
- * in data/fittings.yaml (`synowiec-2021` for the single elbow's magnitudes,
- * `snellpath-installation-model` otherwise, basis recalled); profiles from lib/flow.
+ * in data/fittings.yaml (`synowiec-2021-abstract` for the single elbow, fitted to its published
+ * bounds, basis computed; `snellpath-installation-model` otherwise, basis recalled); the result
+ * carries that `source` and `basis`; profiles from lib/flow.
  *
  * Validity: distance ≥ 0 D (the model is meant from about 1 D on; nearer, it extrapolates a
  * smooth decay into the fitting's own flow), traverses 1–8, Re as lib/flow, h/R in [0, 1).
@@ -174,9 +228,12 @@ export function profileErrorEstimate(input: ProfileErrorInput): ProfileErrorResu
       `the distorted-profile model gives no finite estimate at ${x0} D, beam ${phi} rad`,
     );
   }
+  const prov = modelProvenance(fit);
   return Object.freeze({
     error,
-    spread: MODEL_RELATIVE_SPREAD * Math.abs(error),
+    spread: prov.relativeSpread * Math.abs(error),
+    source: prov.source,
+    basis: prov.basis,
     components,
     profileFactor: k,
     fitting: fit.id,
