@@ -44,8 +44,8 @@ export {
   CHECK_TRAVERSES,
   checkDistances,
   checkInstallationData,
-  type InstallationCheck,
   INSTALLATION_DATA_TABLES,
+  type InstallationCheck,
 } from "./published.ts";
 export {
   DEFAULT_PATH_ORIENTATIONS,
