@@ -84,3 +84,37 @@ print((a.mu/(a.rho*a.w**3))/(b.mu/(b.rho*b.w**3)))
     closeRel(ours, ratio, 1e-6, "α(80 °C)/α(30 °C) = classical-trend ratio");
   },
 );
+
+Deno.test("every registry liquid plans at the ends and middle of its stated range", async () => {
+  const { defaultRegistry } = await import("../../lib/registry/mod.ts");
+  const { parseQuantity } = await import("../../lib/units.ts");
+  const failures: string[] = [];
+  let planned = 0;
+  for (const l of defaultRegistry().liquids()) {
+    const lo = parseQuantity(l.validity.temperature.min, "temperature", "min");
+    const hi = parseQuantity(l.validity.temperature.max, "temperature", "max");
+    // 4 MPa (above every vapour pressure in range; ammonia is 2.0 MPa at 50 °C), inside the stated pressure range
+    const pMax = l.validity.pressure
+      ? parseQuantity(l.validity.pressure.max, "pressure", "max")
+      : 1e6;
+    const p = Math.min(4e6, pMax);
+    for (const T of [lo, (lo + hi) / 2, hi]) {
+      const text = `
+name: Sweep ${l.id} (invented)
+pipe: { standard: ASME B36.10M, nps: "6", schedule: "40", material: carbon-steel }
+fluid: { liquid: ${l.id}, temperature: ${T} K, pressure: ${p} Pa }
+flow: { minimum: 2 L/s, design: 10 L/s, maximum: 20 L/s }
+transducer: { wedgeSoundSpeed: 2720 m/s, wedgeAngle: 38 deg, frequency: 1 MHz }
+mountings: [1, 2]
+`;
+      try {
+        planSite(await readSiteText(text), { monteCarlo: false });
+        planned++;
+      } catch (e) {
+        failures.push(`${l.id} at ${(T - 273.15).toFixed(1)} °C: ${(e as Error).message}`);
+      }
+    }
+  }
+  assert.deepEqual(failures, [], failures.join("\n"));
+  assert.ok(planned >= 3 * 20, `${planned} plans`);
+});
