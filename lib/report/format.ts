@@ -407,3 +407,30 @@ export function formatWithUncertainty(value: number, uncertainty: number, unit: 
   const r = (v: number) => (Math.round(v / step) * step).toFixed(dec);
   return `${r(x)} ± ${r(u)}${tail}`;
 }
+
+/**
+ * A catalogue pipe's designation in the words of its own standard. Copper tube (ASTM B88) is
+ * named by type and nominal size (`ASTM B88 type L, nominal size 3 in`), not by NPS and
+ * schedule; ductile iron (AWWA C151) by nominal size and pressure class; other descriptions are
+ * returned unchanged.
+ *
+ * Source: ASTM B88 (tube types K, L, M by standard size); AWWA C151 (pressure classes) —
+ * naming conventions, common practice.
+ *
+ * @param description a plan's pipe description, e.g. "ASTM B88 NPS 3 schedule L"
+ * @returns the designation text
+ *
+ * @example
+ * ```ts
+ * import { pipeDesignation } from "./format.ts";
+ * const s = pipeDesignation("ASTM B88 NPS 3 schedule L");
+ * if (s !== "ASTM B88 type L, nominal size 3 in") throw new Error(s);
+ * ```
+ */
+export function pipeDesignation(description: string): string {
+  const cu = /^ASTM B88 NPS (\S+) schedule (?:type )?([KLM])$/i.exec(description);
+  if (cu) return `ASTM B88 type ${cu[2].toUpperCase()}, nominal size ${cu[1]} in`;
+  const di = /^AWWA C151 NPS (\S+) schedule PC ?(\d+)$/i.exec(description);
+  if (di) return `AWWA C151 nominal size ${di[1]} in, pressure class ${di[2]}`;
+  return description;
+}

@@ -17,6 +17,7 @@ export {
   htmlPage,
   type HtmlPageOptions,
   markdownTable,
+  pipeDesignation,
   type TableCell,
   textTable,
   type TextTableOptions,

@@ -195,3 +195,26 @@ Deno.test("precision follows the uncertainty (JCGM 100:2008 GUM 7.2.6 and exampl
     assert.ok(planHtml(p).includes(s), `${p.id}: HTML report shows ${s}`);
   }
 });
+
+Deno.test("copper tube is named by its own designation (ASTM B88 type and nominal size)", async () => {
+  const { readSiteText } = await import("../../lib/site/read.ts");
+  const p = planSite(
+    await readSiteText(`
+name: Copper check (invented)
+pipe: { standard: ASTM B88, nps: "3", schedule: "L", material: copper }
+fluid: { liquid: water, temperature: 60 degC }
+flow: { minimum: 1 L/s, maximum: 5 L/s }
+transducer: { wedgeSoundSpeed: 2720 m/s, wedgeAngle: 38 deg, frequency: 1 MHz }
+`),
+    { monteCarlo: false },
+  );
+  // ASTM B88 3 in type L: OD 3.125 in, wall 0.090 in (recalled).
+  assert.ok(
+    Math.abs(p.pipe.outsideDiameter - 3.125 * 0.0254) < 1e-6,
+    "the tube planned is B88 3 in",
+  );
+  for (const s of [planText(p), planHtml(p), formatCard(p)]) {
+    assert.ok(s.includes("ASTM B88 type L, nominal size 3 in"), "designation");
+    assert.ok(!/B88 NPS|schedule L/.test(s), "no NPS/schedule words for copper");
+  }
+});
