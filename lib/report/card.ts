@@ -212,7 +212,8 @@ export function jobCard(p: SitePlan): JobCard {
       `Wall: gauge the wall with an ultrasonic thickness gauge at each transducer footprint, ` +
       `at 12, 3, 6 and 9 o'clock; planned wall ${mmq(p.pipe.wallThickness, 3)}.`,
       "Readings file: record temperature, wallThickness and, for each mounting tried, " +
-      "traverses, totalTime, fixedDelay and deltaT (see docs/job-card.md).",
+      "traverses, totalTime, fixedDelay, deltaT and, if the flow can be stopped, " +
+      "zeroFlowDeltaT (see docs/readings.md).",
     ],
   };
 }

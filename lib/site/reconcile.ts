@@ -36,6 +36,8 @@ export interface MountingReading {
   readonly deltaT?: number;
   /** Area-mean velocity the meter indicated with the planned figures, m/s. */
   readonly indicatedVelocity?: number;
+  /** Δt read with the flow stopped (a zero check), s; any value other than 0 is a zero offset. */
+  readonly zeroFlowDeltaT?: number;
 }
 
 /** Readings taken on site. SI. */
@@ -50,7 +52,10 @@ export interface FieldReadings {
 
 /** A candidate cause of the mismatch, fitted to every reading at once. */
 export interface MismatchCause {
-  /** Cause name: temperature, fixed-delay, wedge, wall, lining, deposits, gas, other-liquid. */
+  /**
+   * Cause name: temperature, fixed-delay, wedge, wall, lining, deposits, gas, other-liquid, or
+   * zero-offset (a Δt offset read at zero flow; it moves the flow, not the transit times).
+   */
   readonly cause: CauseName;
   /** What would explain the readings, in words with figures. */
   readonly explanation: string;
@@ -98,6 +103,18 @@ export interface MountingReconciliation {
     readonly correctedFlowRate: number;
     /** relativeCorrection */
     readonly relativeCorrection: number;
+  };
+  /**
+   * Δt zero offset read with the flow stopped, s, and the area-mean velocity it alone would show
+   * (m/s); present when the reading carries `zeroFlowDeltaT`.
+   */
+  readonly zeroOffset?: {
+    /** The Δt read at zero flow, s. */
+    readonly deltaT: number;
+    /** Area-mean velocity worth of the offset, m/s: planned figures, minimum flow's profile factor. */
+    readonly velocity: number;
+    /** |deltaT| above {@link RECONCILE_BOUNDS}.zeroDeltaT. */
+    readonly significant: boolean;
   };
 }
 
@@ -164,6 +181,8 @@ export const RECONCILE_BOUNDS = {
   depositRelative: 0.05,
   /** Largest plausible sound-speed drop from entrained gas, relative. */
   gasRelative: 0.05,
+  /** Largest Δt read at zero flow that is still read as zero (noise of a zero check), s. */
+  zeroDeltaT: 50e-12,
 } as const;
 
 /**
@@ -225,7 +244,10 @@ export function soundSpeedFromLiquidTime(
  * to all readings at once with the clamp-on forward model and ranked by χ² plus plausibility
  * (lib/site/reconcile_fit.ts); readings of two traverse counts separate delay errors (constant
  * time) from sound-speed errors (time per crossing). Another registry liquid is offered only
- * when no cause within the declared one fits. Flow is recomputed with the measured liquid time
+ * when no cause within the declared one fits. A Δt read with the flow stopped
+ * (`zeroFlowDeltaT`) above {@link RECONCILE_BOUNDS}.zeroDeltaT is a cause of its own
+ * (`zero-offset`, listed first: it is read, not inferred) and is subtracted from the Δt of the
+ * corrected flow. Flow is recomputed with the measured liquid time
  * in the Snell-invariant form v = c_w·Δt / (2·sin θ_w·τ) and the re-planned bore. Bounds of the
  * causes: {@link RECONCILE_BOUNDS} (common practice). See docs/readings.md.
  *
@@ -268,98 +290,11 @@ export function reconcile(
   if (readings.temperature !== undefined) {
     tr.push(traceEntry("liquid temperature (measured on site)", T, "K", "site", "measured"));
   }
-  const traverses = [...new Set([...site.mountings, ...readings.mountings.map((m) => m.traverses)])]
-    .sort((a, b) => a - b);
-  const adjusted: SiteInput = {
-    ...site,
-    fluid: { ...site.fluid, temperature: T, temperatureRange: undefined },
-    pipe: readings.wallThickness !== undefined
-      ? { ...site.pipe, measuredWallThickness: readings.wallThickness }
-      : site.pipe,
-    mountings: traverses,
-  };
-  const planned: SitePlan = planSite(site, { registry: reg, monteCarlo: false });
-  const plan: SitePlan = planSite(adjusted, { registry: reg, monteCarlo: false });
+  const { planned, plan } = replan(site, readings, T, reg);
   for (const t of plan.trace) tr.push(t);
-  const cw = plan.transducer.wedgeSoundSpeed;
-  const s = Math.sin(plan.transducer.wedgeAngle) / cw;
-  const cReg = plan.fluid.soundSpeed;
-  const bore = plan.pipe.boreDiameter;
-  const wall = plan.pipe.wallThickness;
-  const out: MountingReconciliation[] = readings.mountings.map((r, i) => {
-    const field = `readings.mountings[${i}]`;
-    if (!Number.isInteger(r.traverses) || r.traverses < 1 || r.traverses > 8) {
-      throw new InputError(`${field}.traverses`, String(r.traverses), "an integer from 1 to 8");
-    }
-    if (!(Number.isFinite(r.totalTime) && r.totalTime > 0)) {
-      throw new InputError(`${field}.totalTime`, String(r.totalTime), "a time > 0");
-    }
-    const m = plan.mountings.find((x) => x.traverses === r.traverses)!;
-    const fixed = r.fixedDelay ?? site.transducer.fixedDelay ?? 0;
-    // the plan's total less its liquid time: wall, lining and (when its geometry is known) wedge
-    const tau = r.totalTime - fixed - (m.totalTime - m.fluidTime);
-    const c = soundSpeedFromLiquidTime(tau, r.traverses, bore, s);
-    // standard uncertainty of the inferred speed: wall tolerance (bore), fixed delay, data spread
-    const uBore = 2 * (readings.wallThickness !== undefined ? 0.1e-3 : 0.125 * wall / 2) /
-      Math.sqrt(3);
-    const cBore = soundSpeedFromLiquidTime(tau, r.traverses, bore + uBore, s);
-    const cTau = soundSpeedFromLiquidTime(tau - 50e-9 / Math.sqrt(3), r.traverses, bore, s);
-    const u = Math.hypot(cBore - c, cTau - c, plan.fluid.soundSpeedSpread / Math.sqrt(3));
-    const tolerance = 2 * u;
-    const diff = c - cReg;
-    const consistent = Math.abs(diff) <= tolerance;
-    let flow: MountingReconciliation["flow"];
-    const pm = planned.mountings.find((x) => x.traverses === r.traverses) ??
-      plan.mountings.find((x) => x.traverses === r.traverses)!;
-    // profile factor at the velocity read: iterate v → Re → k (three steps converge)
-    const nu = plan.fluid.kinematicViscosity;
-    const kFor = (vPath: number) => {
-      let k = plan.operatingPoints[0].profileFactor;
-      for (let j = 0; j < 4; j++) {
-        k = profileFactor(Math.max(1, Math.abs(k * vPath) * bore / nu), {
-          extrapolate: true,
-          warnings: [],
-        });
-      }
-      return k;
-    };
-    const areaPlanned = Math.PI / 4 * planned.pipe.boreDiameter ** 2;
-    const areaNow = Math.PI / 4 * bore ** 2;
-    if (r.deltaT !== undefined) {
-      const pathPlanned = cw * r.deltaT / (2 * Math.sin(plan.transducer.wedgeAngle) * pm.fluidTime);
-      const pathNow = cw * r.deltaT / (2 * Math.sin(plan.transducer.wedgeAngle) * tau);
-      const vPlanned = kFor(pathPlanned) * pathPlanned;
-      const vNow = kFor(pathNow) * pathNow;
-      flow = {
-        plannedVelocity: vPlanned,
-        correctedVelocity: vNow,
-        plannedFlowRate: vPlanned * areaPlanned,
-        correctedFlowRate: vNow * areaNow,
-        relativeCorrection: vNow * areaNow / (vPlanned * areaPlanned) - 1,
-      };
-    } else if (r.indicatedVelocity !== undefined) {
-      const vNow = r.indicatedVelocity * pm.fluidTime / tau;
-      flow = {
-        plannedVelocity: r.indicatedVelocity,
-        correctedVelocity: vNow,
-        plannedFlowRate: r.indicatedVelocity * areaPlanned,
-        correctedFlowRate: vNow * areaNow,
-        relativeCorrection: vNow * areaNow / (r.indicatedVelocity * areaPlanned) - 1,
-      };
-    }
-    return {
-      traverses: r.traverses,
-      measuredLiquidTime: tau,
-      plannedLiquidTime: m.fluidTime,
-      inferredSoundSpeed: c,
-      registrySoundSpeed: cReg,
-      difference: diff,
-      tolerance,
-      consistent,
-      causes: [] as MismatchCause[],
-      flow,
-    };
-  });
+  const out = readings.mountings.map((r, i) =>
+    reconcileMounting(site, readings, plan, planned, r, i)
+  );
   const bad = out.filter((m) => !m.consistent);
   const stated = readings.mountings.map((r) => r.fixedDelay ?? site.transducer.fixedDelay);
   const timeReadings: TimeReading[] = readings.mountings.map((r, i) => ({
@@ -376,35 +311,19 @@ export function reconcile(
         "error: read a second mounting (Z and V, or V and W) on the same pipe",
     });
   }
-  const causes = bad.length === 0 ? [] : rankCauses(site, readings, setup, timeReadings, {
+  const timeCauses = bad.length === 0 ? [] : rankCauses(site, readings, setup, timeReadings, {
     delayStated: stated.some((d) => d !== undefined),
     wallGauged: readings.wallThickness !== undefined,
     temperatureMeasured: readings.temperature !== undefined,
     T,
   });
-  const line = traverseLine(timeReadings);
-  let tLine: Reconciliation["traverseLine"];
-  if (line) {
-    const ns = [...new Set(timeReadings.map((r) => r.traverses))];
-    const planned = traverseLine(ns.map((n) => ({
-      traverses: n,
-      fixedDelay: 0,
-      totalTime:
-        predictTimes({ setup, delay: 0 }, [{ traverses: n, totalTime: 0, fixedDelay: 0 }])[0],
-    })))!;
-    tLine = {
-      offset: line.offset,
-      plannedOffset: planned.offset,
-      perTraverse: line.perTraverse,
-      plannedPerTraverse: planned.perTraverse,
-    };
-  }
-  const withCauses = out.map((m) => m.consistent ? m : { ...m, causes });
-  const summary = bad.length === 0
-    ? "readings agree with the plan within their uncertainty"
-    : `readings disagree with the plan on ${bad.length} ${
-      bad.length === 1 ? "mounting" : "mountings"
-    }; likeliest cause: ` + (causes[0]?.explanation ?? "none found");
+  const zero = zeroOffsetCauses(out);
+  const causes = [...zero, ...timeCauses];
+  const withCauses = out.map((m) =>
+    m.consistent
+      ? { ...m, causes: zero.filter((c) => c.explanation.startsWith(`${m.traverses}-traverse`)) }
+      : { ...m, causes }
+  );
   tr.push(
     traceEntry(
       "reconciliation bounds (plausible sizes of the causes)",
@@ -418,15 +337,200 @@ export function reconcile(
     name: site.name,
     registryHash: reg.hash,
     temperature: T,
-    wallThickness: wall,
+    wallThickness: plan.pipe.wallThickness,
     mountings: withCauses,
     causes,
-    traverseLine: tLine,
+    traverseLine: traverseLineSummary(timeReadings, setup),
     separable,
-    summary,
+    summary: summaryLine(bad.length, timeCauses, zero),
     warnings: [...plan.warnings, ...warnings],
     trace: tr,
   };
+}
+
+/** The site as planned, and re-planned with the measured temperature, wall and every mounting read. */
+function replan(
+  site: SiteInput,
+  readings: FieldReadings,
+  T: number,
+  reg: Registry,
+): { planned: SitePlan; plan: SitePlan } {
+  const traverses = [...new Set([...site.mountings, ...readings.mountings.map((m) => m.traverses)])]
+    .sort((a, b) => a - b);
+  const adjusted: SiteInput = {
+    ...site,
+    fluid: { ...site.fluid, temperature: T, temperatureRange: undefined },
+    pipe: readings.wallThickness !== undefined
+      ? { ...site.pipe, measuredWallThickness: readings.wallThickness }
+      : site.pipe,
+    mountings: traverses,
+  };
+  return {
+    planned: planSite(site, { registry: reg, monteCarlo: false }),
+    plan: planSite(adjusted, { registry: reg, monteCarlo: false }),
+  };
+}
+
+/** One mounting: liquid time, inferred sound speed and its tolerance, flow, zero offset. */
+function reconcileMounting(
+  site: SiteInput,
+  readings: FieldReadings,
+  plan: SitePlan,
+  planned: SitePlan,
+  r: MountingReading,
+  i: number,
+): MountingReconciliation {
+  const field = `readings.mountings[${i}]`;
+  if (!Number.isInteger(r.traverses) || r.traverses < 1 || r.traverses > 8) {
+    throw new InputError(`${field}.traverses`, String(r.traverses), "an integer from 1 to 8");
+  }
+  if (!(Number.isFinite(r.totalTime) && r.totalTime > 0)) {
+    throw new InputError(`${field}.totalTime`, String(r.totalTime), "a time > 0");
+  }
+  if (r.zeroFlowDeltaT !== undefined && !Number.isFinite(r.zeroFlowDeltaT)) {
+    throw new InputError(`${field}.zeroFlowDeltaT`, String(r.zeroFlowDeltaT), "a finite time");
+  }
+  const s = Math.sin(plan.transducer.wedgeAngle) / plan.transducer.wedgeSoundSpeed;
+  const bore = plan.pipe.boreDiameter;
+  const wall = plan.pipe.wallThickness;
+  const m = plan.mountings.find((x) => x.traverses === r.traverses)!;
+  const fixed = r.fixedDelay ?? site.transducer.fixedDelay ?? 0;
+  // the plan's total less its liquid time: wall, lining and (when its geometry is known) wedge
+  const tau = r.totalTime - fixed - (m.totalTime - m.fluidTime);
+  const c = soundSpeedFromLiquidTime(tau, r.traverses, bore, s);
+  // standard uncertainty of the inferred speed: wall tolerance (bore), fixed delay, data spread
+  const uBore = 2 * (readings.wallThickness !== undefined ? 0.1e-3 : 0.125 * wall / 2) /
+    Math.sqrt(3);
+  const cBore = soundSpeedFromLiquidTime(tau, r.traverses, bore + uBore, s);
+  const cTau = soundSpeedFromLiquidTime(tau - 50e-9 / Math.sqrt(3), r.traverses, bore, s);
+  const u = Math.hypot(cBore - c, cTau - c, plan.fluid.soundSpeedSpread / Math.sqrt(3));
+  const cReg = plan.fluid.soundSpeed;
+  const pm = planned.mountings.find((x) => x.traverses === r.traverses) ?? m;
+  const flows = flowFromReading(r, plan, planned, pm.fluidTime, tau);
+  return {
+    traverses: r.traverses,
+    measuredLiquidTime: tau,
+    plannedLiquidTime: m.fluidTime,
+    inferredSoundSpeed: c,
+    registrySoundSpeed: cReg,
+    difference: c - cReg,
+    tolerance: 2 * u,
+    consistent: Math.abs(c - cReg) <= 2 * u,
+    causes: [] as MismatchCause[],
+    flow: flows.flow,
+    zeroOffset: flows.zeroOffset,
+  };
+}
+
+/**
+ * Flow from Δt (less any zero offset read at zero flow) or the indicated velocity, with the
+ * planned and the measured liquid time; and the velocity a zero offset alone indicates.
+ */
+function flowFromReading(
+  r: MountingReading,
+  plan: SitePlan,
+  planned: SitePlan,
+  plannedLiquidTime: number,
+  tau: number,
+): Pick<MountingReconciliation, "flow" | "zeroOffset"> {
+  const cw = plan.transducer.wedgeSoundSpeed;
+  const sinW = Math.sin(plan.transducer.wedgeAngle);
+  const bore = plan.pipe.boreDiameter;
+  const nu = plan.fluid.kinematicViscosity;
+  // profile factor at the velocity read: iterate v → Re → k (three steps converge)
+  const kFor = (vPath: number) => {
+    let k = plan.operatingPoints[0].profileFactor;
+    for (let j = 0; j < 4; j++) {
+      k = profileFactor(Math.max(1, Math.abs(k * vPath) * bore / nu), {
+        extrapolate: true,
+        warnings: [],
+      });
+    }
+    return k;
+  };
+  const pathV = (dt: number, t: number) => cw * dt / (2 * sinW * t);
+  const zero = r.zeroFlowDeltaT;
+  const zeroOffset = zero === undefined ? undefined : {
+    deltaT: zero,
+    // worth at the minimum flow's profile factor (the offset rides on whatever flow runs)
+    velocity: plan.operatingPoints[0].profileFactor * pathV(zero, plannedLiquidTime),
+    significant: Math.abs(zero) > RECONCILE_BOUNDS.zeroDeltaT,
+  };
+  const areaPlanned = Math.PI / 4 * planned.pipe.boreDiameter ** 2;
+  const areaNow = Math.PI / 4 * bore ** 2;
+  const rates = (vPlanned: number, vNow: number) => ({
+    plannedVelocity: vPlanned,
+    correctedVelocity: vNow,
+    plannedFlowRate: vPlanned * areaPlanned,
+    correctedFlowRate: vNow * areaNow,
+    relativeCorrection: vNow * areaNow / (vPlanned * areaPlanned) - 1,
+  });
+  if (r.deltaT !== undefined) {
+    const pathPlanned = pathV(r.deltaT, plannedLiquidTime);
+    const pathNow = pathV(r.deltaT - (zero ?? 0), tau);
+    return { flow: rates(kFor(pathPlanned) * pathPlanned, kFor(pathNow) * pathNow), zeroOffset };
+  }
+  if (r.indicatedVelocity !== undefined) {
+    const vNow = (r.indicatedVelocity - (zeroOffset?.velocity ?? 0)) * plannedLiquidTime / tau;
+    return { flow: rates(r.indicatedVelocity, vNow), zeroOffset };
+  }
+  return { zeroOffset };
+}
+
+/** A zero offset read at zero flow is a cause of its own: it moves the flow, not the times. */
+function zeroOffsetCauses(out: readonly MountingReconciliation[]): MismatchCause[] {
+  return out.filter((m) => m.zeroOffset?.significant).map((m) => {
+    const z = m.zeroOffset!;
+    return {
+      cause: "zero-offset" as const,
+      explanation: `${m.traverses}-traverse Δt reads ${
+        (z.deltaT * 1e9).toFixed(2)
+      } ns with the flow stopped (a zero offset worth ${
+        (z.velocity * 1e3).toFixed(1)
+      } mm/s): re-zero at no flow; the corrected flow subtracts it`,
+      value: z.deltaT,
+      unit: "s",
+      rmsResidual: 0,
+      plausible: true,
+      score: 0,
+    };
+  });
+}
+
+/** Z/V/W agreement, measured and planned, when the readings hold two traverse counts. */
+function traverseLineSummary(
+  timeReadings: readonly TimeReading[],
+  setup: ForwardSetup,
+): Reconciliation["traverseLine"] {
+  const line = traverseLine(timeReadings);
+  if (!line) return undefined;
+  const ns = [...new Set(timeReadings.map((r) => r.traverses))];
+  const planned = traverseLine(ns.map((n) => ({
+    traverses: n,
+    fixedDelay: 0,
+    totalTime:
+      predictTimes({ setup, delay: 0 }, [{ traverses: n, totalTime: 0, fixedDelay: 0 }])[0],
+  })))!;
+  return {
+    offset: line.offset,
+    plannedOffset: planned.offset,
+    perTraverse: line.perTraverse,
+    plannedPerTraverse: planned.perTraverse,
+  };
+}
+
+/** The one-line summary. */
+function summaryLine(
+  bad: number,
+  timeCauses: readonly MismatchCause[],
+  zero: readonly MismatchCause[],
+): string {
+  const zeroNote = zero.length === 0
+    ? ""
+    : `; Δt zero offset on ${zero.length} ${zero.length === 1 ? "mounting" : "mountings"}`;
+  if (bad === 0) return "readings agree with the plan within their uncertainty" + zeroNote;
+  return `readings disagree with the plan on ${bad} ${bad === 1 ? "mounting" : "mountings"}` +
+    `; likeliest cause: ${timeCauses[0]?.explanation ?? "none found"}` + zeroNote;
 }
 
 /** The planned setup the causes perturb, from the re-planned site. */

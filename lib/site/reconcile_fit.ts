@@ -60,7 +60,8 @@ export type CauseName =
   | "lining"
   | "deposits"
   | "gas"
-  | "other-liquid";
+  | "other-liquid"
+  | "zero-offset";
 
 /** A perturbation of the setup: the changed setup and an extra delay, s. */
 export interface Perturbed {

@@ -26,6 +26,7 @@ const PER_MOUNTING: Record<string, Dimension | "count"> = {
   fixedDelay: "time",
   deltaT: "time",
   indicatedVelocity: "speed",
+  zeroFlowDeltaT: "time",
 };
 
 /** Mounting letters of the trade and their traverse counts. */
