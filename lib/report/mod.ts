@@ -53,3 +53,10 @@ export {
   jobCard,
   jobCardHtml,
 } from "./card.ts";
+export {
+  FLEET_INDEX_HEADINGS,
+  fleetIndexHtml,
+  type FleetIndexRefusal,
+  type FleetIndexRow,
+  VERDICT_CLASSES,
+} from "./fleet_index.ts";

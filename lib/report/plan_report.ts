@@ -5,6 +5,7 @@
  *
  * @module
  */
+import { fleetIndexHtml } from "./fleet_index.ts";
 import type { SitePlan } from "../site/plan.ts";
 import type { Reconciliation } from "../site/reconcile.ts";
 import {
@@ -642,7 +643,8 @@ export function planHtml(p: SitePlan): string {
 }
 
 /**
- * The HTML index of a fleet: the summary table linking each site's page.
+ * The HTML index of a fleet: counts of verdicts, then the summary table with its own headings,
+ * verdicts coloured and spelled out, linking each site's page (see {@link fleetIndexHtml}).
  *
  * @param rows summary rows (from {@link fleetRow}) with the page file name, or refusals
  * @param title page title
@@ -656,28 +658,7 @@ export function fleetHtml(
   })[],
   title = "Fleet summary",
 ): string {
-  const body = `<h1>${escapeHtml(title)}</h1><table><thead><tr>${
-    FLEET_HEADERS.map((h) => `<th>${escapeHtml(h)}</th>`).join("")
-  }</tr></thead><tbody>${
-    rows.map((r) =>
-      "row" in r
-        ? `<tr>${
-          r.row.map((c, i) =>
-            i === 1
-              ? `<td><a href="${escapeHtml(r.href)}">${escapeHtml(String(c))}</a></td>`
-              : i === FLEET_HEADERS.length - 1
-              ? `<td title="${escapeHtml(String(c))}"><code>${
-                escapeHtml(String(c).slice(0, 12))
-              }…</code></td>`
-              : `<td>${escapeHtml(String(c))}</td>`
-          ).join("")
-        }</tr>`
-        : `<tr><td>${escapeHtml(r.id)}</td><td>${escapeHtml(r.name)}</td><td colspan="7">refused: ${
-          escapeHtml(r.error)
-        }</td></tr>`
-    ).join("")
-  }</tbody></table><p>${escapeHtml(REPORT_SAFETY)}</p>`;
-  return htmlPage({ title, body, css: EXTRA_CSS });
+  return fleetIndexHtml(rows, title, REPORT_SAFETY);
 }
 
 /**
