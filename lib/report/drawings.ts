@@ -24,6 +24,7 @@ import {
   positive,
   svgDocument,
   text,
+  textWidth,
 } from "./svg.ts";
 
 const WALL_FILL = "#b9b9b9";
@@ -490,6 +491,41 @@ export interface RunOptions {
   readonly title?: string;
 }
 
+type Anchor = "start" | "middle" | "end";
+
+/** A label to place on a row: where it points, its anchor, text, size and lowest row. */
+interface RowLabel {
+  readonly x: number;
+  readonly anchor: Anchor;
+  readonly text: string;
+  readonly size: number;
+  readonly minRow: number;
+}
+
+/**
+ * Place labels on rows so that none overprints another: each label, in order, is kept inside
+ * [4, width − 4] (its anchor moved to the near edge when it would stick out) and takes the
+ * lowest row from its `minRow` up where its extent, widened by 8 units, meets no label already
+ * placed. Extents use {@link textWidth} with a 10 % margin.
+ */
+function stackRows(
+  labels: readonly RowLabel[],
+  width: number,
+): { x: number; anchor: Anchor; row: number }[] {
+  const placed: { a: number; b: number; row: number }[] = [];
+  return labels.map((l) => {
+    const w = textWidth(l.text, l.size) * 1.1;
+    let { x, anchor } = l;
+    let a = anchor === "start" ? x : anchor === "end" ? x - w : x - w / 2;
+    if (a < 4) [x, anchor, a] = [4, "start", 4];
+    if (a + w > width - 4) [x, anchor, a] = [width - 4, "end", width - 4 - w];
+    let row = l.minRow;
+    while (placed.some((p) => p.row === row && a - 8 < p.b && p.a < a + w + 8)) row++;
+    placed.push({ a, b: a + w, row });
+    return { x, anchor, row };
+  });
+}
+
 /**
  * The straight run between two fittings, flow left to right: the stretches each fitting needs
  * kept clear, the admissible zone between them (or a marked overlap when the run is too short),
@@ -532,16 +568,45 @@ export function svgRun(o: RunOptions): string {
     throw new InputError("upstreamLabel/downstreamLabel", "not a text", "fitting names");
   }
 
-  const W = 760, left = 100, right = W - 100, yPipe = 130, ph = 30;
+  const W = 760, left = 100, right = W - 100, ph = 30;
   const X = (m: number) => left + (m / run) * (right - left);
   const fmtLen = (m: number) => `${q(m, unit, 3)} (${formatCompact(m / d, 3)} D)`;
+  const upEnd = Math.min(up, run), downStart = Math.max(run - down, 0);
+  // Labels above the pipe: the fittings' names on row 0, the positions from row 1 up; labels
+  // below: the keep-clear lengths. Each takes the lowest row where it overprints no other.
+  const above: RowLabel[] = [
+    { x: left - 24, anchor: "start", text: o.upstreamLabel, size: 12, minRow: 0 },
+    { x: right + 24, anchor: "end", text: o.downstreamLabel, size: 12, minRow: 0 },
+  ];
+  const markAt = (m: number, label: string) => {
+    const x = X(m);
+    const anchor: Anchor = x < left + 120 ? "start" : x > right - 120 ? "end" : "middle";
+    return { x, anchor, text: `${label} ${fmtLen(m)}`, size: 13, minRow: 1 };
+  };
+  if (rec !== undefined) above.push(markAt(rec, "recommended"));
+  if (cp !== undefined) above.push(markAt(cp, "common practice"));
+  const below: RowLabel[] = [
+    { x: X(upEnd / 2), anchor: "middle", text: `keep clear ${fmtLen(up)}`, size: 12, minRow: 0 },
+    {
+      x: X((downStart + run) / 2),
+      anchor: "middle",
+      text: `keep clear ${fmtLen(down)}`,
+      size: 12,
+      minRow: 0,
+    },
+  ];
+  const rowsAbove = stackRows(above, W), rowsBelow = stackRows(below, W);
+  const topRow = Math.max(0, ...rowsAbove.map((r) => r.row));
+  const belowRows = Math.max(0, ...rowsBelow.map((r) => r.row));
+  const yPipe = Math.max(130, 81 + 16 * topRow);
+  const yAbove = (row: number) => yPipe - ph / 2 - 20 - 16 * row;
+  const yBelow = (row: number) => yPipe + ph / 2 + 28 + 15 * row;
   let out = text(W / 2, 24, title, { anchor: "middle", size: 15, weight: "600" });
 
   // Zones.
   const zone = (a: number, z: number, fill: string, opacity = 1) =>
     `<rect x="${c(X(a))}" y="${c(yPipe - ph / 2 - 14)}" width="${c(Math.max(X(z) - X(a), 0))}" ` +
     `height="${c(ph + 28)}" fill="${fill}" fill-opacity="${opacity}"/>`;
-  const upEnd = Math.min(up, run), downStart = Math.max(run - down, 0);
   out += `<defs><pattern id="keepclear" width="8" height="8" patternUnits="userSpaceOnUse" ` +
     `patternTransform="rotate(45)"><line x1="0" y1="0" x2="0" y2="8" stroke="#9a9a9a" ` +
     `stroke-width="3"/></pattern></defs>`;
@@ -555,81 +620,65 @@ export function svgRun(o: RunOptions): string {
     `fill="${FLUID_FILL}" fill-opacity="0.6" stroke="${INK}" stroke-width="1.4"/>`;
   out += line(left + 10, yPipe, left + 60, yPipe, INK, 1.2) + arrowHead(left + 60, yPipe, 0, 7) +
     text(left + 10, yPipe - 4, "flow", { size: 12 });
-  // Fittings as blocks at both ends, labelled.
-  const fitting = (xc: number, label: string, anchor: "end" | "start") =>
+  // Fittings as blocks at both ends.
+  const fitting = (xc: number) =>
     `<rect x="${c(xc - 12)}" y="${c(yPipe - ph / 2 - 10)}" width="24" height="${ph + 20}" ` +
-    `fill="#6f6f6f" stroke="${INK}"/>` +
-    text(anchor === "end" ? xc + 12 : xc - 12, yPipe - ph / 2 - 20, label, { anchor, size: 12 });
-  out += fitting(left - 12, o.upstreamLabel, "start");
-  out += fitting(right + 12, o.downstreamLabel, "end");
+    `fill="#6f6f6f" stroke="${INK}"/>`;
+  out += fitting(left - 12) + fitting(right + 12);
+  // Positions above the pipe: line and arrowhead at the position, label on its row.
+  const markLine = (m: number, fill: string) => {
+    const x = X(m), yt = yPipe - ph / 2 - 16;
+    return line(x, yt - 2, x, yPipe + ph / 2, fill, 1.6) +
+      `<polygon points="${points([[x, yt], [x - 7, yt - 11], [x + 7, yt - 11]])}" fill="${fill}"/>`;
+  };
+  if (cp !== undefined) out += markLine(cp, "#555555");
+  if (rec !== undefined) out += markLine(rec, BEAM);
+  for (const [i, r] of rowsAbove.entries()) {
+    const fill = above[i].text.startsWith("recommended")
+      ? BEAM
+      : above[i].text.startsWith("common practice")
+      ? "#555555"
+      : undefined;
+    out += text(r.x, yAbove(r.row), above[i].text, {
+      anchor: r.anchor,
+      size: above[i].size,
+      ...(fill ? { fill } : {}),
+    });
+  }
+  for (const [i, r] of rowsBelow.entries()) {
+    out += text(r.x, yBelow(r.row), below[i].text, { anchor: r.anchor, size: below[i].size });
+  }
   // Axis in diameters.
-  const yAxis = yPipe + ph / 2 + 40;
+  const yAxis = yPipe + ph / 2 + 40 + 15 * belowRows;
   out += line(left, yAxis, right, yAxis, INK, 1);
   const ticks = niceTicks(0, run / d, 8).filter((t) => t <= run / d + 1e-9);
   for (const t of ticks) {
     out += line(X(t * d), yAxis, X(t * d), yAxis + 5, INK, 1) +
-      text(X(t * d), yAxis + 18, formatCompact(t, 3), {
-        anchor: "middle",
-        size: 12,
-      });
+      text(X(t * d), yAxis + 18, formatCompact(t, 3), { anchor: "middle", size: 12 });
   }
   out += text(
     right,
     yAxis + 34,
     `distance from the upstream fitting, in diameters (D = ${q(d, "mm", 4)})`,
-    {
-      anchor: "end",
-      size: 12,
-    },
+    { anchor: "end", size: 12 },
   );
-  // Requirement labels.
-  out += text(X(upEnd / 2), yPipe + ph / 2 + 28, `keep clear ${fmtLen(up)}`, {
-    anchor: "middle",
-    size: 12,
-  });
-  out += text(X((downStart + run) / 2), yPipe + ph / 2 + 28, `keep clear ${fmtLen(down)}`, {
-    anchor: "middle",
-    size: 12,
-  });
-  // Positions above the pipe.
-  const mark = (m: number, label: string, fill: string, row: number) => {
-    const x = X(m), yt = yPipe - ph / 2 - 16;
-    const anchor = x < left + 120 ? "start" : x > right - 120 ? "end" : "middle";
-    return line(x, yt - 2, x, yPipe + ph / 2, fill, 1.6) +
-      `<polygon points="${
-        points([[x, yt], [x - 7, yt - 11], [x + 7, yt - 11]])
-      }" fill="${fill}"/>` +
-      text(x, yt - 16 - row * 17, `${label} ${fmtLen(m)}`, { anchor, size: 13, fill });
-  };
-  if (cp !== undefined) out += mark(cp, "common practice", "#555555", rec !== undefined ? 1 : 0);
-  if (rec !== undefined) out += mark(rec, "recommended", BEAM, 0);
-  // Legend.
+  // Legend: the second key starts after the first key's text.
   const ly = yAxis + 60;
   const H = ly + 16;
-  out +=
-    `<rect x="${left}" y="${
-      ly - 10
-    }" width="14" height="12" fill="url(#keepclear)" stroke="${INK}" stroke-width="0.5"/>` +
-    text(left + 20, ly, "straight length each fitting needs", { size: 12 });
+  const firstKey = "straight length each fitting needs";
+  const x2 = left + 20 + textWidth(firstKey, 12) + 28;
+  out += `<rect x="${left}" y="${ly - 10}" width="14" height="12" fill="url(#keepclear)" ` +
+    `stroke="${INK}" stroke-width="0.5"/>` + text(left + 20, ly, firstKey, { size: 12 });
   out += admissible
-    ? `<rect x="${left + 260}" y="${
-      ly - 10
-    }" width="14" height="12" fill="#cfe3c4" stroke="${INK}" stroke-width="0.5"/>` +
-      text(left + 280, ly, `admissible zone ${q(run - up - down, unit, 3)}`, {
+    ? `<rect x="${c(x2)}" y="${ly - 10}" width="14" height="12" fill="#cfe3c4" stroke="${INK}" ` +
+      `stroke-width="0.5"/>` +
+      text(x2 + 20, ly, `admissible zone ${q(run - up - down, unit, 3)}`, { size: 12 })
+    : `<rect x="${c(x2)}" y="${ly - 10}" width="14" height="12" fill="${ACCENT}" ` +
+      `fill-opacity="0.35" stroke="${INK}" stroke-width="0.5"/>` +
+      text(x2 + 20, ly, `no admissible zone: the run is ${q(up + down - run, unit, 3)} short`, {
         size: 12,
-      })
-    : `<rect x="${left + 260}" y="${
-      ly - 10
-    }" width="14" height="12" fill="${ACCENT}" fill-opacity="0.35" stroke="${INK}" stroke-width="0.5"/>` +
-      text(
-        left + 280,
-        ly,
-        `no admissible zone: the run is ${q(up + down - run, unit, 3)} short`,
-        {
-          size: 12,
-          fill: ACCENT,
-        },
-      );
+        fill: ACCENT,
+      });
   return svgDocument(
     W,
     H,
