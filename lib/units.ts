@@ -583,3 +583,46 @@ export function absolutePressureNote(text: string): string | undefined {
   const u = m[1].toLowerCase();
   return `"${text.trim()}" read as absolute pressure (${u}a); write ${u}g for a gauge reading`;
 }
+
+/**
+ * A value in SI shown in the unit the user wrote a quantity in: `inUnitOf(0.0063, "100 GPM",
+ * "flowRate")` → `"99.86 GPM"`. The unit is read exactly as the parser reads it (any case the
+ * parser accepts, gauge or absolute pressure marks, temperature scales with their offset): the
+ * conversion is x = (v − s(0)) / (s(1) − s(0)) with s(u) = the SI value of `u <unit>`.
+ *
+ * @param value the value, SI
+ * @param written a quantity as the user wrote it (`"4.5 in"`, `"68 degF"`, `"30 psig"`)
+ * @param dimension its dimension
+ * @param digits significant digits (default 4)
+ * @returns the value with the user's unit, or undefined when `written` carries no unit or the
+ *   unit is the SI unit itself
+ *
+ * @example
+ * ```ts
+ * import { inUnitOf } from "./units.ts";
+ * if (inUnitOf(0.1143, "4.5 in", "length") !== "4.5 in") throw new Error("in");
+ * if (inUnitOf(293.15, "68 degF", "temperature") !== "68 degF") throw new Error("degF");
+ * if (inUnitOf(2, "1 m", "length") !== undefined) throw new Error("SI unit: nothing to add");
+ * ```
+ */
+export function inUnitOf(
+  value: number,
+  written: string,
+  dimension: Dimension,
+  digits = 4,
+): string | undefined {
+  if (typeof written !== "string" || !Number.isFinite(value)) return undefined;
+  const m = NUMBER.exec(written.trim().replace(/\u2212/g, "-"));
+  const unit = m?.[2]?.trim();
+  if (!unit) return undefined;
+  let s0: number, s1: number;
+  try {
+    s0 = parseQuantity(`0 ${unit}`, dimension, "unit");
+    s1 = parseQuantity(`1 ${unit}`, dimension, "unit");
+  } catch {
+    return undefined;
+  }
+  if (s0 === 0 && s1 === 1) return undefined;
+  const x = (value - s0) / (s1 - s0);
+  return `${Number(x.toPrecision(digits))} ${unit}`;
+}

@@ -4,9 +4,9 @@
  *
  * @module
  */
-import { parseCli, runMain } from "./_cli.ts";
+import { givenLine, parseCli, runMain } from "./_cli.ts";
 import { InputError } from "../lib/errors.ts";
-import { parseQuantity } from "../lib/units.ts";
+import { inUnitOf, parseQuantity } from "../lib/units.ts";
 import { defaultRegistry } from "../lib/registry/mod.ts";
 import { defaultStandard, pipe, type PipeLiningLayer, type ResolvedPipe } from "../lib/pipe/mod.ts";
 
@@ -163,18 +163,27 @@ function list(v: Values): void {
   }
 }
 
-function show(p: ResolvedPipe): void {
+/**
+ * Show a pipe. Lengths in mm, and beside them in the unit the user wrote a length in when it is
+ * not metric (`--od "4.5 in"` → inches), else in inches for catalogue sizes (NPS are inch sizes).
+ */
+function show(p: ResolvedPipe, written?: string): void {
   const head = p.origin === "catalogue"
     ? `${p.standard} ${p.sizeLabel}, ${p.schedule} (${p.material})`
     : `measured pipe (${p.material})`;
   console.log(head);
   const row = (label: string, value: string) => console.log(`  ${label.padEnd(20)} ${value}`);
-  row(
-    "outside diameter",
-    `${mmText(p.outsideDiameter)} mm  (${(p.outsideDiameter / 0.0254).toFixed(3)} in)`,
-  );
-  row("wall thickness", `${mmText(p.wallThickness)} mm`);
-  row("inside diameter", `${mmText(p.insideDiameter)} mm`);
+  const metric = written === undefined || /(^|\s)(k|c|m|µ|u)?m\s*$/.test(written);
+  const echo = (x: number) => {
+    if (!metric) {
+      const u = inUnitOf(x, written!, "length", 5);
+      if (u) return `  (${u})`;
+    }
+    return p.origin === "catalogue" || !metric ? `  (${(x / 0.0254).toFixed(3)} in)` : "";
+  };
+  row("outside diameter", `${mmText(p.outsideDiameter)} mm${echo(p.outsideDiameter)}`);
+  row("wall thickness", `${mmText(p.wallThickness)} mm${echo(p.wallThickness)}`);
+  row("inside diameter", `${mmText(p.insideDiameter)} mm${echo(p.insideDiameter)}`);
   p.lining.forEach((l, i) => row(`lining ${i + 1}`, `${l.material} ${mmText(l.thickness)} mm`));
   if (p.lining.length) row("bore diameter", `${mmText(p.boreDiameter)} mm`);
   const t = p.tolerances;
@@ -271,6 +280,13 @@ runMain(() => {
       ...(str(v, "tolerance-from") ? { toleranceFrom: str(v, "tolerance-from") } : {}),
     });
   }
-  if (v.json) console.log(JSON.stringify(p, null, 2));
-  else show(p);
+  if (v.json) return console.log(JSON.stringify(p, null, 2));
+  show(p, ["od", "circumference", "wall"].map((k) => str(v, k)).find((x) => x !== undefined));
+  const given = givenLine(v, [
+    ["od", "length"],
+    ["circumference", "length"],
+    ["wall", "length"],
+    ["tape-thickness", "length"],
+  ]);
+  if (given) console.log(given);
 });

@@ -5,6 +5,7 @@
  * @module
  */
 import {
+  givenLine,
   optionalQuantity,
   parseCli,
   requireOption,
@@ -12,7 +13,7 @@ import {
   runMain,
   stringOptions,
 } from "./_cli.ts";
-import { parseQuantity } from "../lib/units.ts";
+import { inUnitOf, parseQuantity } from "../lib/units.ts";
 import { InputError } from "../lib/errors.ts";
 import { checkStraightRun, rankPositions, resolveFitting } from "../lib/installation/mod.ts";
 
@@ -142,8 +143,18 @@ runMain(() => {
     return 0;
   }
   const deg = (x: number) => `${Math.round(x * 180 / Math.PI)}°`;
+  // lengths echoed in the unit the user wrote the run (or position, or diameter) in, beside SI
+  const written = [v.run, v.position, v.diameter].find((x) =>
+    typeof x === "string" && !/D\s*$/.test(x)
+  ) as string | undefined;
+  // "2.03 m (6.67 ft, 10 D)": the user's unit only when it is not a metric length
+  const len = (x: number) => {
+    const u = written === undefined ? undefined : inUnitOf(x, written, "length", 3);
+    const echo = u && !/ (k|c|m|µ|u)?m$/.test(u) ? `${u}, ` : "";
+    return `${r2(x)} m (${echo}${r1(x / D)} D)`;
+  };
   if (check) {
-    console.log(`Straight run at ${r2(position!)} m (${r1(position! / D)} D): ${check.verdict}`);
+    console.log(`Straight run at ${len(position!)}: ${check.verdict}`);
     for (const r of check.reasons) console.log(`  ${r}`);
   }
   if (rank && run !== undefined) {
@@ -157,14 +168,12 @@ runMain(() => {
         }`,
     );
     console.log(
-      `common-practice position  ${r2(rank.commonPracticePosition)} m (${
-        r1(rank.commonPracticePosition / D)
-      } D)`,
+      `common-practice position  ${len(rank.commonPracticePosition)}`,
     );
     console.log(
-      `recommended position      ${r2(rank.recommendedPosition)} m (${
-        r1(rank.recommendedPosition / D)
-      } D), path plane ${deg(rank.recommendedOrientation)} from vertical`,
+      `recommended position      ${len(rank.recommendedPosition)}, path plane ${
+        deg(rank.recommendedOrientation)
+      } from vertical`,
     );
     console.log("");
     console.log("  position      plane   est. error   downstream   straight run");
@@ -178,6 +187,8 @@ runMain(() => {
     console.log("");
     for (const n of rank.notes) console.log(`note: ${n}`);
   }
+  const given = givenLine(v, [["diameter", "length"], ["orientation", "angle"]]);
+  if (given) console.log(given);
   return 0;
 });
 

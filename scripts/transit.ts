@@ -5,14 +5,14 @@
  * @module
  */
 import { InputError } from "../lib/errors.ts";
-import { parseQuantity } from "../lib/units.ts";
+import { inUnitOf, parseQuantity } from "../lib/units.ts";
 import { clampOnPath } from "../lib/acoustics/path.ts";
 import {
   flowRangeTimes,
   minimumResolvableVelocity,
   wallBorneSignal,
 } from "../lib/acoustics/transit.ts";
-import { type OptionSpec, parseCli, runMain } from "./_cli.ts";
+import { givenLine, type OptionSpec, parseCli, runMain } from "./_cli.ts";
 import {
   GEOMETRY_HELP,
   GEOMETRY_OPTIONS,
@@ -121,22 +121,35 @@ async function main(): Promise<number> {
   const out: string[] = [];
   for (const n of geo.notes) out.push(`# ${n}`);
   out.push(
-    `${mountingName(path.traverses)} mounting, ${path.traverses} traverse(s): spacing ${
-      (path.spacing * 1000).toFixed(2)
-    } mm, liquid path ${(path.fluidPathLength * 1000).toFixed(2)} mm, liquid angle ${
+    `${mountingName(path.traverses)} mounting, ${path.traverses} ${
+      path.traverses === 1 ? "traverse" : "traverses"
+    }: spacing ${(path.spacing * 1000).toFixed(2)} mm, liquid path ${
+      (path.fluidPathLength * 1000).toFixed(2)
+    } mm, liquid angle ${
       (path.fluidAngle * 180 / Math.PI).toFixed(2)
-    } deg, wall mode ${path.wallMode}`,
+    }°, wall mode ${path.wallMode}`,
   );
   out.push(
-    `profile factor ${range.profileFactor}; bore area ${(range.area * 1e4).toFixed(3)} cm^2`,
+    `profile factor ${range.profileFactor}; bore area ${(range.area * 1e4).toFixed(3)} cm²`,
   );
   out.push("");
+  // the flows or velocities as the user wrote them, in their unit, when it is not the table's
+  const first = raw.split(",")[0].trim();
+  const echoOf = (p: (typeof range.points)[number]) =>
+    inUnitOf(isFlow ? p.flowRate : p.areaVelocity, first, isFlow ? "flowRate" : "speed", 5);
+  const echoUnit = range.points.length
+    ? echoOf(range.points[0])?.split(" ").slice(1).join(" ")
+    : "";
+  const showEcho = echoUnit !== undefined && echoUnit !== "" &&
+    !["L/s", "l/s", "m/s"].includes(echoUnit);
   out.push(
-    "flow L/s   area v m/s  path v m/s  upstream us    downstream us  Δt ns       Δt linear ns",
+    (showEcho ? `given ${echoUnit}`.padEnd(13) : "") +
+      "flow L/s   area v m/s  path v m/s  upstream µs    downstream µs  Δt ns       Δt linear ns",
   );
   for (const p of range.points) {
     out.push(
       [
+        showEcho ? (echoOf(p)?.split(" ")[0] ?? "").padEnd(13) : "",
         (p.flowRate * 1000).toFixed(3).padEnd(11),
         p.areaVelocity.toFixed(4).padEnd(12),
         p.velocity.toFixed(4).padEnd(12),
@@ -162,15 +175,22 @@ async function main(): Promise<number> {
   }
   if (wall) {
     out.push(
-      `wall-borne signal at ${(wall.wallArrival * 1e6).toFixed(3)} us, liquid at ${
+      `wall-borne signal at ${(wall.wallArrival * 1e6).toFixed(3)} µs, liquid at ${
         (wall.liquidArrival * 1e6).toFixed(3)
-      } us (separation ${(wall.separation * 1e6).toFixed(3)} us, margin ${
+      } µs (separation ${(wall.separation * 1e6).toFixed(3)} µs, margin ${
         (wall.margin * 1e6).toFixed(3)
-      } us): ${
+      } µs): ${
         wall.overlaps ? "too close: the wall signal may mask the liquid one" : "well apart"
       }`,
     );
   }
+  const given = givenLine(values, [
+    ["temperature", "temperature"],
+    ["pressure", "pressure"],
+    ["timing-resolution", "time"],
+    ["frequency", "frequency"],
+  ]);
+  if (given) out.push(given);
   console.log(out.join("\n"));
   return 0;
 }
