@@ -22,7 +22,31 @@ mountings: [1, 2]
 const PIPES = [
   "{ standard: ASME B36.10M, nps: '12', schedule: '40', material: carbon-steel }",
   "{ standard: ASTM B88, nps: '3', schedule: L }",
+  // a 600 mm class water main: AWWA C151 NPS 24 PC 350 with its default cement-mortar lining
+  "{ standard: AWWA C151, nps: '24', schedule: 'PC 350' }",
 ];
+
+Deno.test("a taped 600 mm cement-lined ductile-iron main plans as the catalogue one does", async () => {
+  const flow = "flow: { minimum: 50 L/s, design: 200 L/s, maximum: 400 L/s }";
+  const cat = planSite(
+    await readSiteText(site(PIPES[2], 12, "4 bar").replace(/flow: .*/, flow)),
+    { monteCarlo: false },
+  );
+  // the tape round the pipe: C = π·OD, OD from the catalogue row, wall from a gauge
+  const od = cat.pipe.outsideDiameter;
+  const taped = "{ circumference: " + (Math.PI * od * 1000).toFixed(1) + " mm, " +
+    "wallThickness: 10.9 mm, material: ductile-iron, " +
+    "lining: { material: cement-mortar, thickness: 2.4 mm } }";
+  const plan = planSite(
+    await readSiteText(site(taped, 12, "4 bar").replace(/flow: .*/, flow)),
+    { monteCarlo: false },
+  );
+  closeRel(plan.pipe.outsideDiameter, od, 1e-4, "OD from the tape (C to 0.1 mm)");
+  assert.equal(plan.pipe.lining[0].material, "cement-mortar");
+  for (const [i, m] of plan.mountings.entries()) {
+    closeRel(m.spacing, cat.mountings[i].spacing, 0.01, `${m.name} spacing within 1 %`);
+  }
+});
 
 Deno.test("water at 80, 95 and 130 °C plans, with the absorption extrapolation said", async () => {
   for (const pipe of PIPES) {
