@@ -49,9 +49,11 @@ export {
 } from "./published.ts";
 export {
   DEFAULT_PATH_ORIENTATIONS,
+  type PathPlane,
   type RankedPosition,
   type RankInput,
   rankPositions,
   type RankResult,
+  SCORE_TIE_TOLERANCE,
   SHORT_RUN_FRACTION,
 } from "./rank.ts";

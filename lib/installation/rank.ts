@@ -9,6 +9,9 @@ import { MODEL_NOTE, profileErrorEstimate } from "./model.ts";
 import { MARGINAL_FRACTION, type StraightRunVerdict } from "./straight_run.ts";
 import type { ProfileModel } from "../flow/profile.ts";
 
+/** Relative tolerance under which two scores are a tie (1e-4 of the larger). */
+export const SCORE_TIE_TOLERANCE = 1e-4;
+
 /** Fraction of the run used as the common-practice position when the run is short. */
 export const SHORT_RUN_FRACTION = 0.75;
 
@@ -64,6 +67,33 @@ export interface RankedPosition {
   readonly score: number;
   /** Straight-run verdict at this position. */
   readonly verdict: StraightRunVerdict;
+  /** Whether the length left to the downstream fitting meets its requirement (≥ W D). */
+  readonly meetsDownstream: boolean;
+}
+
+/**
+ * Path plane and transducer clock positions of the recommended candidate.
+ *
+ * Clock convention: 12 o'clock at the crown (top of the pipe), 6 at the invert, the clock read
+ * looking downstream (along the flow) and counted clockwise; an angle ψ from the vertical (rad,
+ * counted the same way) is the clock hour 6ψ/π. The path plane contains the pipe axis and
+ * meets the wall at ψ and ψ + π. A path crossing the bore an odd number of times (Z: 1) has its
+ * transducers on opposite sides, at ψ and ψ + π (horizontal plane: 3 and 9 o'clock); an even
+ * number (V: 2, W: 4) has both on one side, at ψ (the side met between 12 and 6 o'clock going
+ * clockwise; horizontal plane: both at 3 o'clock).
+ */
+export interface PathPlane {
+  /** Path-plane angle from the vertical, rad, reduced to [0, π) (π/2 is horizontal). */
+  readonly angleFromVertical: number;
+  /** Bore crossings the clock positions are given for. */
+  readonly traverses: number;
+  /** Whether both transducers sit on the same side of the pipe (even traverses). */
+  readonly sameSide: boolean;
+  /**
+   * Clock hours of the upstream and the downstream transducer, in (0, 12] (12 is the crown;
+   * 1.5 is half past one), by the convention above.
+   */
+  readonly clockHours: readonly [number, number];
 }
 
 /** Result of {@link rankPositions}. */
@@ -72,8 +102,10 @@ export interface RankResult {
   readonly commonPracticePosition: number;
   /** The recommended position. */
   readonly recommendedPosition: number;
-  /** The recommended orientation. */
+  /** Path-plane angle of the recommended candidate from the vertical, rad (as given). */
   readonly recommendedOrientation: number;
+  /** Path plane and transducer clock positions of the recommended candidate. */
+  readonly recommendedPathPlane: PathPlane;
   /** The ranking. */
   readonly ranking: readonly RankedPosition[];
   /** The meets common practice. */
@@ -94,23 +126,34 @@ export interface RankResult {
  *   point U D after the upstream fitting (the nearest point that meets the upstream rule while
  *   keeping the downstream one); when it does not, three quarters of the way along the run
  *   from the upstream fitting (common practice).
- * - Ranking: each candidate position × path orientation is scored with
+ * - Score: each candidate position × path orientation is scored with
  *   {@link profileErrorEstimate} at every Reynolds number given (the worst magnitude counts)
- *   plus the downstream fitting's reading shift; smaller is better. The ranking lists the
- *   candidates meeting the straight-run rule first, then marginal, then short ones, each group
- *   by score; the recommended candidate is the first.
+ *   plus the downstream fitting's reading shift; smaller is better.
+ * - Order (the recommended candidate is the first):
+ *   1. downstream filter: when any candidate leaves at least the downstream requirement (W D)
+ *      before the downstream fitting, every such candidate comes before every one that does not;
+ *   2. within each side of that filter, straight-run verdict: meets, then marginal, then short;
+ *   3. then score; scores within {@link SCORE_TIE_TOLERANCE} (relative) of the best one left in
+ *      the group are a tie, broken by the path plane nearer horizontal (π/2 from the vertical),
+ *      then by the earlier position (nearer the upstream fitting), then by score.
+ * - `recommendedPathPlane` gives the recommended plane and the transducer clock positions
+ *   ({@link PathPlane}: 12 o'clock at the crown, read looking downstream, clockwise; Z on
+ *   opposite sides, V and W both on one side).
  *
  * Sources: requirements `common-practice`; model as {@link profileErrorEstimate}.
  * The ranking is an estimate, not a calibration.
  *
  * @param input run length and diameter (m), fittings, traverses, Reynolds numbers, candidates
- * @returns both positions, the recommended orientation, the ranking (best first), notes
+ * @returns both positions, the recommended orientation and path plane, the ranking (best
+ *   first), notes
  *
  * @example
  * ```ts
  * import { rankPositions } from "./rank.ts";
  * const r = rankPositions({ runLength: 1.2, diameter: 0.2, upstream: { fitting: "elbow-90" } });
  * if (Math.abs(r.commonPracticePosition - 0.9) > 1e-12 || r.meetsCommonPractice) throw new Error();
+ * // V path (2 traverses, the default): both transducers on one side
+ * if (!r.recommendedPathPlane.sameSide) throw new Error();
  * ```
  */
 export function rankPositions(input: RankInput): RankResult {
@@ -155,6 +198,7 @@ export function rankPositions(input: RankInput): RankResult {
     const xDown = (L - p) / D;
     const downstreamEffect = Math.abs(de.amplitude) * Math.exp(-xDown / de.decay);
     const verdict = sideVerdict(xUp, reqUp, xDown, reqDown);
+    const meetsDownstream = xDown >= reqDown;
     for (const o of orients) {
       requireFinite("pathOrientations", o, "rad");
       const errors = res.map((re) =>
@@ -179,12 +223,13 @@ export function rankPositions(input: RankInput): RankResult {
         downstreamEffect,
         score: Math.abs(worst) + downstreamEffect,
         verdict,
+        meetsDownstream,
       });
     }
   }
-  const vOrder = { meets: 0, marginal: 1, short: 2 };
-  ranking.sort((a, b) => vOrder[a.verdict] - vOrder[b.verdict] || a.score - b.score);
-  const best = ranking[0];
+  const ordered = orderCandidates(ranking);
+  const best = ordered[0];
+  const traverses = input.traverses ?? 2;
   const notes = [
     MODEL_NOTE,
     `common-practice position: ${
@@ -198,16 +243,77 @@ export function rankPositions(input: RankInput): RankResult {
   if (!meets) {
     notes.push("the run is short of the common-practice requirement: expect a larger error");
   }
+  if (!best.meetsDownstream) {
+    notes.push(
+      `no candidate leaves ${reqDown} D before ${down.id}: the downstream requirement is broken`,
+    );
+  }
   if (res.length > 1) notes.push("each candidate is scored by its worst error over the flow range");
   return Object.freeze({
     commonPracticePosition,
     recommendedPosition: best.position,
     recommendedOrientation: best.orientation,
-    ranking: Object.freeze(ranking),
+    recommendedPathPlane: pathPlane(best.orientation, traverses),
+    ranking: Object.freeze(ordered),
     meetsCommonPractice: meets,
     requiredUpstream: reqUp,
     requiredDownstream: reqDown,
     notes: Object.freeze(notes),
+  });
+}
+
+/**
+ * Order candidates: downstream filter, verdict, then score with ties (relative tolerance
+ * {@link SCORE_TIE_TOLERANCE}) broken by the plane nearer horizontal, then the earlier position.
+ * Ties are taken as blocks against the best score left in the group, so the order does not
+ * depend on the order of the input.
+ */
+function orderCandidates(cands: readonly RankedPosition[]): RankedPosition[] {
+  const vOrder = { meets: 0, marginal: 1, short: 2 };
+  const group = (c: RankedPosition) => (c.meetsDownstream ? 0 : 3) + vOrder[c.verdict];
+  const tieBreak = (a: RankedPosition, b: RankedPosition) =>
+    offHorizontal(a.orientation) - offHorizontal(b.orientation) ||
+    a.position - b.position || a.score - b.score;
+  const sorted = [...cands].sort((a, b) =>
+    group(a) - group(b) || a.score - b.score || tieBreak(a, b)
+  );
+  const out: RankedPosition[] = [];
+  let i = 0;
+  while (i < sorted.length) {
+    const head = sorted[i];
+    const ties = (c: RankedPosition) =>
+      group(c) === group(head) && c.score - head.score <= SCORE_TIE_TOLERANCE * Math.abs(c.score);
+    let j = i + 1;
+    while (j < sorted.length && ties(sorted[j])) j++;
+    out.push(...sorted.slice(i, j).sort(tieBreak));
+    i = j;
+  }
+  return out;
+}
+
+/** Angular distance of a path plane from the horizontal plane, rad, in [0, π/2]. */
+function offHorizontal(o: number): number {
+  const r = ((o % Math.PI) + Math.PI) % Math.PI;
+  return Math.abs(r - Math.PI / 2);
+}
+
+/** {@link PathPlane} of a plane at `o` rad from the vertical for a path of `traverses`. */
+function pathPlane(o: number, traverses: number): PathPlane {
+  const psi = ((o % Math.PI) + Math.PI) % Math.PI;
+  const hour = (a: number) => {
+    const h = ((a * 6 / Math.PI) % 12 + 12) % 12;
+    return h === 0 ? 12 : h;
+  };
+  const sameSide = traverses % 2 === 0;
+  const first = hour(psi);
+  return Object.freeze({
+    angleFromVertical: psi,
+    traverses,
+    sameSide,
+    clockHours: Object.freeze([first, sameSide ? first : hour(psi + Math.PI)]) as readonly [
+      number,
+      number,
+    ],
   });
 }
 

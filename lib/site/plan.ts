@@ -452,7 +452,7 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
   });
   warnings.push(...runStage.warnings);
   addTrace(runStage.trace);
-  const { straightRun, installHalf } = runStage;
+  const { straightRun, installHalf, installProvenance } = runStage;
 
   // --- uncertainty ---------------------------------------------------------------------
   const linThick = lining.reduce((s, l) => s + l.thickness, 0);
@@ -562,8 +562,8 @@ export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
         installHalf / Math.sqrt(3),
         "rectangular",
         "",
-        "snellpath-installation-model",
-        "recalled",
+        installProvenance.source,
+        installProvenance.basis,
       ),
     ];
     return { inputs, result: gumPropagate(flowModel, inputs) };

@@ -4,7 +4,8 @@
  * which enters the budget as a rectangular half-width.
  *
  * Method: {@link rankPositions} and {@link checkStraightRun} (common-practice diameters), and the
- * distorted-profile estimate {@link profileErrorEstimate} (lib/installation, recalled model).
+ * distorted-profile estimate {@link profileErrorEstimate} (lib/installation); its source and
+ * basis ({@link modelProvenance} of the upstream fitting) go to the trace and the budget.
  *
  * @module
  */
@@ -12,6 +13,8 @@ import type { Warning } from "../../errors.ts";
 import { trace as traceEntry, type TraceEntry } from "../../trace.ts";
 import {
   checkStraightRun,
+  type ModelProvenance,
+  modelProvenance,
   profileErrorEstimate,
   rankPositions,
   resolveFitting,
@@ -42,6 +45,8 @@ export interface RunStage {
   readonly straightRun: SitePlan["straightRun"];
   /** Installation-effect half-width, relative (0 without a run). */
   readonly installHalf: number;
+  /** Source and basis of the model terms behind `installHalf` (of "none" without a run). */
+  readonly installProvenance: Pick<ModelProvenance, "source" | "basis">;
   /** Warnings of this stage. */
   readonly warnings: Warning[];
   /** Trace entries of this stage. */
@@ -76,6 +81,7 @@ export function planStraightRun(input: RunStageInput): RunStage {
   };
   let straightRun: SitePlan["straightRun"];
   let installHalf = 0;
+  let installProvenance: RunStage["installProvenance"] = modelProvenance("none");
   const reList = points.map((p) => p.reynolds);
   const designPoint = points.find((p) => p.label === "design") ?? points[points.length - 1];
   if (input.run) {
@@ -123,6 +129,7 @@ export function planStraightRun(input: RunStageInput): RunStage {
       });
     const est = estAt(position);
     installHalf = Math.abs(est.error) + est.spread;
+    installProvenance = { source: est.source, basis: est.basis };
     const along: { position: number; error: number }[] = [];
     for (let i = 0; i <= 40; i++) {
       const x = run.length * i / 40;
@@ -136,8 +143,8 @@ export function planStraightRun(input: RunStageInput): RunStage {
         "formulation: distorted-profile model (estimate)",
         "lib/installation",
         "",
-        "snellpath-installation-model",
-        "recalled",
+        est.source,
+        est.basis,
       ),
     );
     straightRun = {
@@ -168,7 +175,7 @@ export function planStraightRun(input: RunStageInput): RunStage {
     });
   }
 
-  return { straightRun, installHalf, warnings, trace: tr };
+  return { straightRun, installHalf, installProvenance, warnings, trace: tr };
 }
 
 /**
