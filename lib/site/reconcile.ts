@@ -220,7 +220,7 @@ export function soundSpeedFromLiquidTime(
   if (!(liquidTime > 0) || !(target < g(cMax))) {
     throw new InputError(
       "readings.totalTime",
-      `a liquid time of ${(liquidTime * 1e6).toPrecision(5)} us`,
+      `a liquid time of ${(liquidTime * 1e6).toPrecision(5)} µs`,
       "a time that some liquid sound speed can explain (check the fixed delay and the traverses)",
     );
   }
