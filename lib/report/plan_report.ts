@@ -10,6 +10,7 @@ import type { SitePlan } from "../site/plan.ts";
 import type { Reconciliation } from "../site/reconcile.ts";
 import {
   csvTable,
+  displayUnit,
   escapeHtml,
   formatQuantity,
   formatWithUncertainty,
@@ -118,6 +119,18 @@ function traceRows(p: SitePlan | Reconciliation): (string | number)[][] {
 }
 
 const TRACE_HEADERS = ["quantity", "value", "unit", "source", "basis"];
+
+/**
+ * The trace as text lines, one entry a line (`  quantity: value unit  [source, basis]`), units
+ * written as everywhere else in the report (m³, m²/s, °C…); long lines wrap under their indent.
+ */
+function traceLines(p: SitePlan | Reconciliation): string[] {
+  return p.trace.map((t) => {
+    const v = typeof t.value === "number" ? String(Number(t.value.toPrecision(6))) : t.value;
+    const unit = t.unit ? ` ${displayUnit(t.unit)}` : "";
+    return `  ${t.quantity}: ${v}${unit}  [${t.source}, ${t.basis}]`;
+  });
+}
 
 /** Text-report width limit, columns. */
 export const TEXT_WIDTH = 100;
@@ -277,7 +290,7 @@ export function planText(p: SitePlan): string {
   }
   out.push("");
   out.push(`trace (${p.trace.length} entries):`);
-  out.push(fitTable(TRACE_HEADERS, traceRows(p)));
+  out.push(...traceLines(p));
   return fitLines(out.join("\n")) + "\n";
 }
 
