@@ -141,31 +141,35 @@ runMain(() => {
   return failed > 0 || instFailed > 0 || (values.strict && notRun > 0) ? 1 : 0;
 });
 
-/** Installation section: one line per published statement (worst point), failures in full. */
+/** Installation section: one line per published statement (worst point), failures in full;
+ * every line within 100 columns. */
 function printInstallation(checks: InstallationCheck[], all: boolean): void {
   const deg = (o: number) => Number.isNaN(o) ? "all angles" : `${Math.round(o * 180 / Math.PI)}°`;
+  const mount = (t: number) =>
+    ({ 1: "Z", 2: "V", 4: "W" } as Record<number, string>)[t] ??
+      `${t} traverses`;
+  const bounds = (c: InstallationCheck) =>
+    Number.isFinite(c.high) ? `[${c.low}, ${c.high}]` : `≥ ${c.low}`;
   const line = (c: InstallationCheck) =>
     `        ${c.ok ? "pass" : "FAIL"} ${c.distanceDiameters} D ${deg(c.orientation)} ` +
-    `traverses ${c.traverses}${Number.isNaN(c.reynolds) ? "" : ` Re ${c.reynolds}`}: model ${
-      c.model.toFixed(5)
-    } bounds [${c.low}, ${c.high}] deviation ${c.deviation.toExponential(2)} spread ${
-      c.spread.toExponential(2)
-    }`;
+    `${mount(c.traverses)}${Number.isNaN(c.reynolds) ? "" : ` Re ${c.reynolds.toExponential(1)}`}` +
+    `: ${c.model.toFixed(5)} vs ${bounds(c)}, off ${c.deviation.toExponential(1)}, ` +
+    `spread ${c.spread.toExponential(1)}`;
   console.log(`\ninstallation model against published data: ${checks.length} checks`);
   const groups = new Map<string, InstallationCheck[]>();
   for (const c of checks) {
-    const k = `${c.table} [source ${c.source}] ${c.statement}`;
+    const k = `${c.table}\t${c.source}\t${c.statement}`;
     groups.set(k, [...(groups.get(k) ?? []), c]);
   }
   for (const [k, g] of groups) {
+    const [table, source, statement] = k.split("\t");
     const bad = g.filter((c) => !c.ok);
     // closest to its bounds (a point outside them counts as a negative margin)
     const margin = (c: InstallationCheck) =>
       c.deviation > 0 ? -c.deviation : Math.min(c.model - c.low, c.high - c.model);
     const worst = g.reduce((a, c) => (margin(c) < margin(a) ? c : a));
-    console.log(
-      `\n${(bad.length ? "FAIL" : "PASS").padEnd(7)} ${k}: ${g.length} points; nearest its bounds:`,
-    );
+    console.log(`\n${(bad.length ? "FAIL" : "PASS").padEnd(7)} ${table}: ${statement}`);
+    console.log(`        source ${source}; ${g.length} points; nearest its bounds:`);
     for (const c of all ? g : [...new Set([worst, ...bad])]) console.log(line(c));
   }
   const nBad = checks.filter((c) => !c.ok).length;

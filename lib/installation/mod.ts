@@ -39,6 +39,7 @@ export {
   profileErrorSweep,
   type SweepRow,
 } from "./model.ts";
+export { type BendFit, type BendFitInput, fitSingleBend, worstCorrectionFactor } from "./fit.ts";
 export {
   CHECK_ANGLES,
   CHECK_TRAVERSES,

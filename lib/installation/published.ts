@@ -8,6 +8,7 @@
  */
 import { InputError } from "../errors.ts";
 import { defaultRegistry } from "../registry/mod.ts";
+import type { Fitting } from "../registry/schemas/fittings.ts";
 import { profileErrorEstimate } from "./model.ts";
 
 /** Published tables checked, by id (data/installation/). */
@@ -99,6 +100,8 @@ function kOf(e: number, s: number): { k: number; sk: number } {
  * model's own stated spread on that quantity (its `spread`, carried to K).
  *
  * @param tables table ids, default {@link INSTALLATION_DATA_TABLES}
+ * @param options `fitting`: the single-bend entry to check, default the registry's `elbow-90`
+ *   (another entry lets a test show that a model off the published data fails)
  * @returns one entry per check
  *
  * @example
@@ -110,8 +113,10 @@ function kOf(e: number, s: number): { k: number; sk: number } {
  */
 export function checkInstallationData(
   tables: readonly string[] = INSTALLATION_DATA_TABLES,
+  options: { readonly fitting?: string | Fitting } = {},
 ): InstallationCheck[] {
   const reg = defaultRegistry();
+  const bend = options.fitting ?? "elbow-90";
   const out: InstallationCheck[] = [];
   for (const id of tables) {
     if (!INSTALLATION_DATA_TABLES.includes(id)) {
@@ -130,7 +135,7 @@ export function checkInstallationData(
               for (const o of CHECK_ANGLES) {
                 const r = profileErrorEstimate({
                   distanceDiameters: x,
-                  fitting: "elbow-90",
+                  fitting: bend,
                   orientation: o,
                   traverses: tr,
                   reynolds: re,
@@ -163,7 +168,7 @@ export function checkInstallationData(
             for (const o of CHECK_ANGLES) {
               const r = profileErrorEstimate({
                 distanceDiameters: x,
-                fitting: "elbow-90",
+                fitting: bend,
                 orientation: o,
                 traverses: tr,
                 reynolds: re,
@@ -192,7 +197,7 @@ export function checkInstallationData(
         const min = Number(row.minOrientationRange);
         for (const x of xs) {
           const e = (o: number) =>
-            profileErrorEstimate({ distanceDiameters: x, fitting: "elbow-90", orientation: o });
+            profileErrorEstimate({ distanceDiameters: x, fitting: bend, orientation: o });
           const single = CHECK_ANGLES.map((o) => e(o).error);
           const range = (v: number[]) => Math.max(...v) - Math.min(...v);
           let model: number, lo: number;
