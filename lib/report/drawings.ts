@@ -341,23 +341,7 @@ export function svgAxialPath(o: AxialPathOptions): string {
     ? Math.min(0.09, Math.max(0.03, 0.4 * b.od))
     : positive("transducerLength", o.transducerLength);
 
-  // Path in metres: x along the axis from the entry point, y down from the top outer surface.
-  const pts: [number, number][] = [[0, 0]];
-  let x = b.wall * tw;
-  pts.push([x, b.wall]);
-  const yTopIn = b.wall + b.lining, yBotIn = b.od - b.wall - b.lining;
-  if (b.lining > 0) pts.push([x += b.lining * tl, yTopIn]);
-  let atTop = true;
-  for (let i = 0; i < n; i++) {
-    x += b.id * tf;
-    atTop = !atTop;
-    pts.push([x, atTop ? yTopIn : yBotIn]);
-  }
-  if (b.lining > 0) pts.push([x += b.lining * tl, atTop ? b.wall : b.od - b.wall]);
-  x += b.wall * tw;
-  pts.push([x, atTop ? 0 : b.od]);
-  const drawn = x;
-  const exitTop = atTop;
+  const { pts, drawn, exitTop } = beamPoints(b, n, tf, tw, tl);
 
   // Scale: fit the run of pipe into the width and the diameter into the height.
   const W = 720;
@@ -438,6 +422,57 @@ export function svgAxialPath(o: AxialPathOptions): string {
       text(xa, yFlow - 6, "flow", { size: 12 });
   }
   // Caption lines below.
+  axialNotes(o, b, n, drawn, spacing, unit).forEach((s, i) => {
+    out += text(30, yb + tH + 36 + i * 19, s, { size: 13, fill: i === 2 ? ACCENT : INK });
+  });
+  return svgDocument(
+    W,
+    H,
+    title,
+    `Longitudinal section of the pipe with the beam crossing the bore ${n} time(s) between ` +
+      `two transducers ${q(spacing, unit)} apart.`,
+    out,
+  );
+}
+
+/**
+ * The beam's corners in metres (x along the axis from the entry point, y down from the top
+ * outer surface): through wall, lining, n bore crossings, lining and wall; the axial span drawn
+ * and whether the beam leaves on the top surface.
+ */
+function beamPoints(
+  b: ReturnType<typeof bore>,
+  n: number,
+  tf: number,
+  tw: number,
+  tl: number,
+): { pts: [number, number][]; drawn: number; exitTop: boolean } {
+  const pts: [number, number][] = [[0, 0]];
+  let x = b.wall * tw;
+  pts.push([x, b.wall]);
+  const yTopIn = b.wall + b.lining, yBotIn = b.od - b.wall - b.lining;
+  if (b.lining > 0) pts.push([x += b.lining * tl, yTopIn]);
+  let atTop = true;
+  for (let i = 0; i < n; i++) {
+    x += b.id * tf;
+    atTop = !atTop;
+    pts.push([x, atTop ? yTopIn : yBotIn]);
+  }
+  if (b.lining > 0) pts.push([x += b.lining * tl, atTop ? b.wall : b.od - b.wall]);
+  x += b.wall * tw;
+  pts.push([x, atTop ? 0 : b.od]);
+  return { pts, drawn: x, exitTop: atTop };
+}
+
+/** Caption lines of the axial drawing: mounting and sizes, angles, a drawn/given spacing note. */
+function axialNotes(
+  o: AxialPathOptions,
+  b: ReturnType<typeof bore>,
+  n: number,
+  drawn: number,
+  spacing: number,
+  unit: string,
+): string[] {
   const notes = [
     `${mountingName(n)} mounting, ${n} traverse${n > 1 ? "s" : ""}; OD ${q(b.od, unit)}, ` +
     `wall ${q(b.wall, unit)}` +
@@ -453,17 +488,7 @@ export function svgAxialPath(o: AxialPathOptions): string {
         q(spacing, unit),
     );
   }
-  notes.forEach((s, i) => {
-    out += text(30, yb + tH + 36 + i * 19, s, { size: 13, fill: i === 2 ? ACCENT : INK });
-  });
-  return svgDocument(
-    W,
-    H,
-    title,
-    `Longitudinal section of the pipe with the beam crossing the bore ${n} time(s) between ` +
-      `two transducers ${q(spacing, unit)} apart.`,
-    out,
-  );
+  return notes;
 }
 
 /** Arguments of {@link svgRun}. */
@@ -564,24 +589,7 @@ export function svgRun(o: RunOptions): string {
   out += fitting(right + 12, o.downstreamLabel, "end");
   // Axis in diameters.
   const yAxis = yPipe + ph / 2 + 40;
-  out += line(left, yAxis, right, yAxis, INK, 1);
-  const ticks = niceTicks(0, run / d, 8).filter((t) => t <= run / d + 1e-9);
-  for (const t of ticks) {
-    out += line(X(t * d), yAxis, X(t * d), yAxis + 5, INK, 1) +
-      text(X(t * d), yAxis + 18, formatCompact(t, 3), {
-        anchor: "middle",
-        size: 12,
-      });
-  }
-  out += text(
-    right,
-    yAxis + 34,
-    `distance from the upstream fitting, in diameters (D = ${q(d, "mm", 4)})`,
-    {
-      anchor: "end",
-      size: 12,
-    },
-  );
+  out += runAxis(left, right, yAxis, run, d, X);
   // Requirement labels.
   out += text(X(upEnd / 2), yPipe + ph / 2 + 28, `keep clear ${fmtLen(up)}`, {
     anchor: "middle",
@@ -606,7 +614,61 @@ export function svgRun(o: RunOptions): string {
   // Legend.
   const ly = yAxis + 60;
   const H = ly + 16;
-  out +=
+  out += runLegend(left, ly, admissible, { run, up, down }, unit);
+  return svgDocument(
+    W,
+    H,
+    title,
+    `Straight run of ${fmtLen(run)} from ${o.upstreamLabel} to ${o.downstreamLabel}; ` +
+      (admissible
+        ? `admissible zone from ${fmtLen(up)} to ${fmtLen(run - down)}`
+        : "no admissible zone") +
+      (rec !== undefined ? `; recommended position ${fmtLen(rec)}` : "") +
+      (cp !== undefined ? `; common-practice position ${fmtLen(cp)}` : "") + ".",
+    out,
+  );
+}
+
+/** The run drawing's axis in pipe diameters, with ticks and its caption. */
+function runAxis(
+  left: number,
+  right: number,
+  yAxis: number,
+  run: number,
+  d: number,
+  X: (m: number) => number,
+): string {
+  let out = line(left, yAxis, right, yAxis, INK, 1);
+  const ticks = niceTicks(0, run / d, 8).filter((t) => t <= run / d + 1e-9);
+  for (const t of ticks) {
+    out += line(X(t * d), yAxis, X(t * d), yAxis + 5, INK, 1) +
+      text(X(t * d), yAxis + 18, formatCompact(t, 3), {
+        anchor: "middle",
+        size: 12,
+      });
+  }
+  out += text(
+    right,
+    yAxis + 34,
+    `distance from the upstream fitting, in diameters (D = ${q(d, "mm", 4)})`,
+    {
+      anchor: "end",
+      size: 12,
+    },
+  );
+  return out;
+}
+
+/** The run drawing's legend: keep-clear hatch, and the admissible zone or by how much it is short. */
+function runLegend(
+  left: number,
+  ly: number,
+  admissible: boolean,
+  lengths: { readonly run: number; readonly up: number; readonly down: number },
+  unit: string,
+): string {
+  const { run, up, down } = lengths;
+  let out =
     `<rect x="${left}" y="${
       ly - 10
     }" width="14" height="12" fill="url(#keepclear)" stroke="${INK}" stroke-width="0.5"/>` +
@@ -630,16 +692,5 @@ export function svgRun(o: RunOptions): string {
           fill: ACCENT,
         },
       );
-  return svgDocument(
-    W,
-    H,
-    title,
-    `Straight run of ${fmtLen(run)} from ${o.upstreamLabel} to ${o.downstreamLabel}; ` +
-      (admissible
-        ? `admissible zone from ${fmtLen(up)} to ${fmtLen(run - down)}`
-        : "no admissible zone") +
-      (rec !== undefined ? `; recommended position ${fmtLen(rec)}` : "") +
-      (cp !== undefined ? `; common-practice position ${fmtLen(cp)}` : "") + ".",
-    out,
-  );
+  return out;
 }
