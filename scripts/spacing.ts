@@ -361,13 +361,12 @@ function dg(x: number | undefined): string {
   return x === undefined ? "—" : (x * 180 / Math.PI).toFixed(2);
 }
 
-async function main(): Promise<number> {
-  const { values } = parseCli(Deno.args, { ...GEOMETRY_OPTIONS, ...WINDOW_OPTIONS }, HELP);
-  const geo = await resolveGeometry(values);
-  const traverses = parseTraverses(values.traverses, [2]);
-  const paths: ClampOnPath[] = traverses.map((n) => clampOnPath({ ...geo.inputs, traverses: n }));
-  const crit = criticalAngles(geo.inputs);
-
+/** The half-widths the search window spans: the catalogue's, overridden by the --u-* options. */
+function windowUncertainties(
+  values: Record<string, unknown>,
+  geo: ResolvedGeometry,
+  wallMode: ClampOnPath["wallMode"],
+): Record<string, unknown> {
   const given: Record<string, number | undefined> = {
     fluidSoundSpeed: q(values, "u-fluid-speed", "speed"),
     wallThickness: q(values, "u-wall", "length"),
@@ -376,7 +375,7 @@ async function main(): Promise<number> {
   };
   const uws = q(values, "u-wall-speed", "speed");
   if (uws !== undefined) {
-    given[paths[0].wallMode === "shear" ? "wallShearSpeed" : "wallSoundSpeed"] = uws;
+    given[wallMode === "shear" ? "wallShearSpeed" : "wallSoundSpeed"] = uws;
   }
   const unc: Record<string, unknown> = { ...geo.catalogueUncertainties };
   for (const [k, v] of Object.entries(given)) if (v !== undefined) unc[k] = v;
@@ -396,26 +395,16 @@ async function main(): Promise<number> {
     }
     unc.wedgeTemperature = { uncertainty: uT, dSoundSpeedDT: Number(m[1]) };
   }
-  const windows = Object.keys(unc).length === 0
-    ? undefined
-    : paths.map((p) => searchWindow({ ...geo.inputs, traverses: p.traverses }, unc));
+  return unc;
+}
 
-  if (values.json) {
-    console.log(JSON.stringify(
-      {
-        units: "SI (m, s, m/s, rad)",
-        inputs: geo.inputs,
-        notes: geo.notes,
-        criticalAngles: crit,
-        primaryModeRule: PRIMARY_MODE_RULE,
-        paths,
-        searchWindows: windows,
-      },
-      null,
-      2,
-    ));
-    return 0;
-  }
+/** The text output: Snell chain, critical angles, modes, the spacing table and the windows. */
+function spacingText(
+  geo: ResolvedGeometry,
+  paths: readonly ClampOnPath[],
+  crit: ReturnType<typeof criticalAngles>,
+  windows: readonly ReturnType<typeof searchWindow>[] | undefined,
+): string[] {
   const p0 = paths[0];
   const out: string[] = [];
   for (const n of geo.notes) out.push(`# ${n}`);
@@ -478,7 +467,38 @@ async function main(): Promise<number> {
       }
     }
   }
-  console.log(out.join("\n"));
+  return out;
+}
+
+async function main(): Promise<number> {
+  const { values } = parseCli(Deno.args, { ...GEOMETRY_OPTIONS, ...WINDOW_OPTIONS }, HELP);
+  const geo = await resolveGeometry(values);
+  const traverses = parseTraverses(values.traverses, [2]);
+  const paths: ClampOnPath[] = traverses.map((n) => clampOnPath({ ...geo.inputs, traverses: n }));
+  const crit = criticalAngles(geo.inputs);
+
+  const unc = windowUncertainties(values, geo, paths[0].wallMode);
+  const windows = Object.keys(unc).length === 0
+    ? undefined
+    : paths.map((p) => searchWindow({ ...geo.inputs, traverses: p.traverses }, unc));
+
+  if (values.json) {
+    console.log(JSON.stringify(
+      {
+        units: "SI (m, s, m/s, rad)",
+        inputs: geo.inputs,
+        notes: geo.notes,
+        criticalAngles: crit,
+        primaryModeRule: PRIMARY_MODE_RULE,
+        paths,
+        searchWindows: windows,
+      },
+      null,
+      2,
+    ));
+    return 0;
+  }
+  console.log(spacingText(geo, paths, crit, windows).join("\n"));
   return 0;
 }
 

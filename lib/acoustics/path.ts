@@ -382,30 +382,7 @@ export function clampOnPath(inputs: ClampOnInputs): ClampOnPath {
   const cosf = Math.sqrt(1 - sf * sf);
   const tanf = sf / cosf;
 
-  // Lining
-  const nl = layers.length;
-  const liningAngles: number[] = new Array(nl);
-  let liningShift = 0;
-  let liningTime = 0;
-  let liningThickness = 0;
-  for (let i = 0; i < nl; i++) {
-    const l = layers[i];
-    const sl = s * l.soundSpeed;
-    if (!(sl < 1)) {
-      throw new NoPhysicalAnswerError(
-        `no wave reaches the liquid: wedge angle ${deg(aw)} deg is at or beyond the critical ` +
-          `angle ${deg(Math.asin(cw / l.soundSpeed))} deg for lining layer ${i + 1} ` +
-          `(${l.soundSpeed} m/s)`,
-      );
-    }
-    const cl = Math.sqrt(1 - sl * sl);
-    liningAngles[i] = Math.asin(sl);
-    liningShift += l.thickness * sl / cl;
-    liningTime += l.thickness / (l.soundSpeed * cl);
-    liningThickness += l.thickness;
-  }
-  liningShift *= 2;
-  liningTime *= 2;
+  const { liningAngles, liningShift, liningTime, liningThickness } = liningPath(layers, s, aw, cw);
 
   const id = od - 2 * wall;
   const bore = id - 2 * liningThickness;
@@ -424,43 +401,7 @@ export function clampOnPath(inputs: ClampOnInputs): ClampOnPath {
   const fixed = liningTime + (wedgeTime ?? 0) + fluidTime;
 
   // Wall modes: pick the primary one from the refraction sines, then build each record once.
-  const sL = s * cL;
-  const sS = cS === undefined ? 2 : s * cS;
-  const lOk = sL < 1;
-  const sOk = sS < 1;
-  const forced = inputs.wallMode ?? "auto";
-  let primary: WallMode;
-  if (forced === "longitudinal" || forced === "shear") {
-    primary = forced;
-    if (!(forced === "longitudinal" ? lOk : sOk)) {
-      const m = wallModePath(
-        forced,
-        forced === "longitudinal" ? cL : cS!,
-        s,
-        wall,
-        0,
-        0,
-        aw,
-        cw,
-        "blocked",
-      );
-      throw new NoPhysicalAnswerError(`no ${forced} wave in the wall: ${m.blockedBy}`);
-    }
-  } else if (lOk && sL <= SIN_GRAZING) {
-    primary = "longitudinal";
-  } else if (sOk) {
-    primary = "shear";
-  } else if (lOk) {
-    primary = "longitudinal";
-  } else {
-    const why = [
-      wallModePath("longitudinal", cL, s, wall, 0, 0, aw, cw, "blocked").blockedBy,
-      cS === undefined
-        ? "shear speed of the wall not given"
-        : wallModePath("shear", cS, s, wall, 0, 0, aw, cw, "blocked").blockedBy,
-    ];
-    throw new NoPhysicalAnswerError(`no wave reaches the liquid: ${why.join("; ")}`);
-  }
+  const primary = primaryWallMode(inputs.wallMode ?? "auto", cL, cS, s, wall, aw, cw);
   const inner = liquidShift + liningShift;
   const lmode = wallModePath(
     "longitudinal",
@@ -528,6 +469,85 @@ export function clampOnPath(inputs: ClampOnInputs): ClampOnPath {
     );
   }
   return out;
+}
+
+/** Angles, axial shift (in and out), time (in and out) and total thickness of the lining. */
+function liningPath(
+  layers: readonly LiningLayer[],
+  s: number,
+  aw: number,
+  cw: number,
+): { liningAngles: number[]; liningShift: number; liningTime: number; liningThickness: number } {
+  const nl = layers.length;
+  const liningAngles: number[] = new Array(nl);
+  let liningShift = 0;
+  let liningTime = 0;
+  let liningThickness = 0;
+  for (let i = 0; i < nl; i++) {
+    const l = layers[i];
+    const sl = s * l.soundSpeed;
+    if (!(sl < 1)) {
+      throw new NoPhysicalAnswerError(
+        `no wave reaches the liquid: wedge angle ${deg(aw)} deg is at or beyond the critical ` +
+          `angle ${deg(Math.asin(cw / l.soundSpeed))} deg for lining layer ${i + 1} ` +
+          `(${l.soundSpeed} m/s)`,
+      );
+    }
+    const cl = Math.sqrt(1 - sl * sl);
+    liningAngles[i] = Math.asin(sl);
+    liningShift += l.thickness * sl / cl;
+    liningTime += l.thickness / (l.soundSpeed * cl);
+    liningThickness += l.thickness;
+  }
+  liningShift *= 2;
+  liningTime *= 2;
+  return { liningAngles, liningShift, liningTime, liningThickness };
+}
+
+/**
+ * The wall mode the spacing is for ({@link PRIMARY_MODE_RULE}): the forced one if it propagates;
+ * else longitudinal below grazing, else shear, else longitudinal; none throws.
+ */
+function primaryWallMode(
+  forced: NonNullable<ClampOnInputs["wallMode"]>,
+  cL: number,
+  cS: number | undefined,
+  s: number,
+  wall: number,
+  aw: number,
+  cw: number,
+): WallMode {
+  const sL = s * cL;
+  const sS = cS === undefined ? 2 : s * cS;
+  const lOk = sL < 1;
+  const sOk = sS < 1;
+  if (forced === "longitudinal" || forced === "shear") {
+    if (!(forced === "longitudinal" ? lOk : sOk)) {
+      const m = wallModePath(
+        forced,
+        forced === "longitudinal" ? cL : cS!,
+        s,
+        wall,
+        0,
+        0,
+        aw,
+        cw,
+        "blocked",
+      );
+      throw new NoPhysicalAnswerError(`no ${forced} wave in the wall: ${m.blockedBy}`);
+    }
+    return forced;
+  }
+  if (lOk && sL <= SIN_GRAZING) return "longitudinal";
+  if (sOk) return "shear";
+  if (lOk) return "longitudinal";
+  const why = [
+    wallModePath("longitudinal", cL, s, wall, 0, 0, aw, cw, "blocked").blockedBy,
+    cS === undefined
+      ? "shear speed of the wall not given"
+      : wallModePath("shear", cS, s, wall, 0, 0, aw, cw, "blocked").blockedBy,
+  ];
+  throw new NoPhysicalAnswerError(`no wave reaches the liquid: ${why.join("; ")}`);
 }
 
 function finitePath(p: ClampOnPath): boolean {

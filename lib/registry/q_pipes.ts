@@ -343,159 +343,15 @@ function band(
  * ```
  */
 export function pipeQueries(loaded: LoadedRegistry): PipeQueries {
-  const standards: StdIndex[] = [];
-  for (const d of loaded.docs) {
-    if (d.kind !== "pipes") continue;
-    const f = d.data as PipesFile;
-    const rows = f.sizes.map((row) => ({ value: sizeValue(row.nps), row }))
-      .sort((a, b) => a.value - b.value);
-    const schedules = new Map<string, string>();
-    for (const s of f.series.flat()) schedules.set(normalizeSchedule(s), s);
-    const info: PipeStandardInfo = Object.freeze({
-      id: f.id,
-      standard: f.standard,
-      title: f.title,
-      aliases: f.aliases,
-      sizeSystem: f.sizeSystem,
-      material: f.material,
-      source: f.source,
-      basis: f.basis,
-      ...(f.copy ? { copy: f.copy } : {}),
-      series: f.series,
-      sizes: Object.freeze(rows.map((r) => r.row.nps)),
-      ...(f.lining ? { liningMaterial: f.lining.material } : {}),
-    });
-    const names = [f.id, f.standard, ...f.aliases].map(normStandard);
-    standards.push({ file: f, info, rows, schedules, names });
-  }
-  const toleranceSets: PipeToleranceSet[] = [];
-  for (const d of loaded.docs) {
-    if (d.kind !== "tolerances") continue;
-    for (const s of d.data.sets as ToleranceSet[]) {
-      toleranceSets.push(Object.freeze({
-        id: s.id,
-        title: s.title,
-        standards: s.standards,
-        materials: s.materials,
-        source: s.source,
-        basis: s.basis,
-        ...(s.note ? { note: s.note } : {}),
-        rules: Object.freeze(s.rules.map((r) =>
-          Object.freeze({
-            odMax: mm(r.odMaxMm),
-            outsideDiameter: band(r.outsideDiameter),
-            wall: band(r.wall),
-          })
-        )),
-      }));
-    }
-  }
+  const standards = indexStandards(loaded);
+  const toleranceSets = indexTolerances(loaded);
   const records = new Map<string, PipeRecord>();
-
-  const findStandard = (name: string): StdIndex => {
-    if (typeof name !== "string" || name.trim() === "") {
-      throw new InputError(
-        "standard",
-        JSON.stringify(name),
-        "a pipe standard such as ASME B36.10M",
-      );
-    }
-    const n = normStandard(name);
-    const hit = standards.find((s) => s.names.includes(n)) ??
-      standards.find((s) => s.names.some((x) => x.replace(/^(asme|astm|awwa|ansi)/, "") === n));
-    if (!hit) {
-      throw new NotFoundError(
-        "standard",
-        name,
-        nearest(name, standards.flatMap((s) => [s.info.standard, ...s.info.aliases]), 6),
-      );
-    }
-    return hit;
-  };
-
-  const findRow = (std: StdIndex, nps: string | number) => {
-    const v = parseNominalSize(nps);
-    const hit = std.rows.find((r) => Math.abs(r.value - v) < 1e-9);
-    if (!hit) {
-      const near = [...std.rows].sort((a, b) => Math.abs(a.value - v) - Math.abs(b.value - v))
-        .slice(0, 4).sort((a, b) => a.value - b.value).map((r) => r.row.nps);
-      throw new NotFoundError(`nps (${std.info.standard})`, String(nps), near);
-    }
-    return hit;
-  };
-
-  const findSchedule = (std: StdIndex, row: PipesFile["sizes"][number], schedule: string) => {
-    if (typeof schedule !== "string" && typeof schedule !== "number") {
-      throw new InputError("schedule", String(schedule), "a schedule such as 40, STD or DR 11");
-    }
-    const n = normalizeSchedule(String(schedule));
-    const key = std.schedules.get(n) ?? std.schedules.get(n + "S");
-    if (!key || !(key in row.wallMm)) {
-      throw new NotFoundError(
-        `schedule (${std.info.standard} NPS ${row.nps})`,
-        String(schedule),
-        std.file.series.flat().filter((s) => s in row.wallMm),
-      );
-    }
-    return key;
-  };
-
+  const findStandard = (name: string) => standardIn(standards, name);
   const record = (std: StdIndex, row: PipesFile["sizes"][number], key: string): PipeRecord => {
     const id = `${std.file.id}|${row.nps}|${key}`;
     const cached = records.get(id);
     if (cached) return cached;
-    const f = std.file;
-    const w = row.wallMm[key];
-    const wallMm = typeof w === "number" ? w : w.valueMm;
-    const wallProv: PipeProvenance = typeof w === "number"
-      ? {
-        source: f.wallProvenance?.source ?? f.source,
-        basis: f.wallProvenance?.basis ?? f.basis,
-        ...(f.spreadMm !== undefined ? { spread: mm(f.spreadMm) } : {}),
-      }
-      : {
-        source: w.source ?? f.source,
-        basis: w.basis,
-        ...((w.spreadMm ?? f.spreadMm) !== undefined
-          ? { spread: mm((w.spreadMm ?? f.spreadMm)!) }
-          : {}),
-      };
-    const value = sizeValue(row.nps);
-    const rule = f.lining?.rules.find((r) => value >= r.npsMin && value <= r.npsMax);
-    const lining: PipeLiningRecord | undefined = f.lining && rule
-      ? Object.freeze({
-        material: f.lining.material,
-        thickness: mm(rule.thicknessMm),
-        source: f.lining.source,
-        basis: f.lining.basis,
-        ...(f.lining.spreadMm !== undefined ? { spread: mm(f.lining.spreadMm) } : {}),
-      })
-      : undefined;
-    const od = mm(row.outsideDiameterMm);
-    const wall = mm(wallMm);
-    const basis = weaker(f.basis, wallProv.basis);
-    const rec: PipeRecord = Object.freeze({
-      standard: f.standard,
-      standardId: f.id,
-      nps: row.nps,
-      nominalSize: value,
-      sizeLabel: f.sizeSystem === "NPS" ? `NPS ${row.nps}` : `${row.nps} in`,
-      schedule: key,
-      outsideDiameter: od,
-      wallThickness: wall,
-      insideDiameter: mm(row.outsideDiameterMm - 2 * wallMm),
-      material: f.material,
-      ...(lining ? { lining } : {}),
-      source: f.source,
-      basis,
-      ...(f.copy && (f.basis === "transcribed" || wallProv.basis === "transcribed")
-        ? { copy: f.copy }
-        : {}),
-      provenance: Object.freeze({
-        outsideDiameter: Object.freeze({ source: f.source, basis: f.basis }),
-        wallThickness: Object.freeze(wallProv),
-      }),
-    });
+    const rec = pipeRecord(std, row, key);
     records.set(id, rec);
     return rec;
   };
@@ -566,4 +422,173 @@ export function pipeQueries(loaded: LoadedRegistry): PipeQueries {
       );
     },
   };
+}
+
+/** The pipe standards of the loaded registry, sizes ordered by nominal size. */
+function indexStandards(loaded: LoadedRegistry): StdIndex[] {
+  const standards: StdIndex[] = [];
+  for (const d of loaded.docs) {
+    if (d.kind !== "pipes") continue;
+    const f = d.data as PipesFile;
+    const rows = f.sizes.map((row) => ({ value: sizeValue(row.nps), row }))
+      .sort((a, b) => a.value - b.value);
+    const schedules = new Map<string, string>();
+    for (const s of f.series.flat()) schedules.set(normalizeSchedule(s), s);
+    const info: PipeStandardInfo = Object.freeze({
+      id: f.id,
+      standard: f.standard,
+      title: f.title,
+      aliases: f.aliases,
+      sizeSystem: f.sizeSystem,
+      material: f.material,
+      source: f.source,
+      basis: f.basis,
+      ...(f.copy ? { copy: f.copy } : {}),
+      series: f.series,
+      sizes: Object.freeze(rows.map((r) => r.row.nps)),
+      ...(f.lining ? { liningMaterial: f.lining.material } : {}),
+    });
+    const names = [f.id, f.standard, ...f.aliases].map(normStandard);
+    standards.push({ file: f, info, rows, schedules, names });
+  }
+  return standards;
+}
+
+/** The manufacturing-tolerance sets of the loaded registry, SI. */
+function indexTolerances(loaded: LoadedRegistry): PipeToleranceSet[] {
+  const toleranceSets: PipeToleranceSet[] = [];
+  for (const d of loaded.docs) {
+    if (d.kind !== "tolerances") continue;
+    for (const s of d.data.sets as ToleranceSet[]) {
+      toleranceSets.push(Object.freeze({
+        id: s.id,
+        title: s.title,
+        standards: s.standards,
+        materials: s.materials,
+        source: s.source,
+        basis: s.basis,
+        ...(s.note ? { note: s.note } : {}),
+        rules: Object.freeze(s.rules.map((r) =>
+          Object.freeze({
+            odMax: mm(r.odMaxMm),
+            outsideDiameter: band(r.outsideDiameter),
+            wall: band(r.wall),
+          })
+        )),
+      }));
+    }
+  }
+  return toleranceSets;
+}
+
+/** A standard by id, name or alias (a missing ASME/ASTM/AWWA/ANSI prefix tolerated). */
+function standardIn(standards: readonly StdIndex[], name: string): StdIndex {
+  if (typeof name !== "string" || name.trim() === "") {
+    throw new InputError(
+      "standard",
+      JSON.stringify(name),
+      "a pipe standard such as ASME B36.10M",
+    );
+  }
+  const n = normStandard(name);
+  const hit = standards.find((s) => s.names.includes(n)) ??
+    standards.find((s) => s.names.some((x) => x.replace(/^(asme|astm|awwa|ansi)/, "") === n));
+  if (!hit) {
+    throw new NotFoundError(
+      "standard",
+      name,
+      nearest(name, standards.flatMap((s) => [s.info.standard, ...s.info.aliases]), 6),
+    );
+  }
+  return hit;
+}
+
+/** The size row of a standard; a miss names the four nearest sizes. */
+function findRow(std: StdIndex, nps: string | number): StdIndex["rows"][number] {
+  const v = parseNominalSize(nps);
+  const hit = std.rows.find((r) => Math.abs(r.value - v) < 1e-9);
+  if (!hit) {
+    const near = [...std.rows].sort((a, b) => Math.abs(a.value - v) - Math.abs(b.value - v))
+      .slice(0, 4).sort((a, b) => a.value - b.value).map((r) => r.row.nps);
+    throw new NotFoundError(`nps (${std.info.standard})`, String(nps), near);
+  }
+  return hit;
+}
+
+/** The schedule key of a size row; a miss names the schedules the size has. */
+function findSchedule(
+  std: StdIndex,
+  row: PipesFile["sizes"][number],
+  schedule: string,
+): string {
+  if (typeof schedule !== "string" && typeof schedule !== "number") {
+    throw new InputError("schedule", String(schedule), "a schedule such as 40, STD or DR 11");
+  }
+  const n = normalizeSchedule(String(schedule));
+  const key = std.schedules.get(n) ?? std.schedules.get(n + "S");
+  if (!key || !(key in row.wallMm)) {
+    throw new NotFoundError(
+      `schedule (${std.info.standard} NPS ${row.nps})`,
+      String(schedule),
+      std.file.series.flat().filter((s) => s in row.wallMm),
+    );
+  }
+  return key;
+}
+
+/** One catalogue pipe record (SI) with its provenance, frozen. */
+function pipeRecord(std: StdIndex, row: PipesFile["sizes"][number], key: string): PipeRecord {
+  const f = std.file;
+  const w = row.wallMm[key];
+  const wallMm = typeof w === "number" ? w : w.valueMm;
+  const wallProv: PipeProvenance = typeof w === "number"
+    ? {
+      source: f.wallProvenance?.source ?? f.source,
+      basis: f.wallProvenance?.basis ?? f.basis,
+      ...(f.spreadMm !== undefined ? { spread: mm(f.spreadMm) } : {}),
+    }
+    : {
+      source: w.source ?? f.source,
+      basis: w.basis,
+      ...((w.spreadMm ?? f.spreadMm) !== undefined
+        ? { spread: mm((w.spreadMm ?? f.spreadMm)!) }
+        : {}),
+    };
+  const value = sizeValue(row.nps);
+  const rule = f.lining?.rules.find((r) => value >= r.npsMin && value <= r.npsMax);
+  const lining: PipeLiningRecord | undefined = f.lining && rule
+    ? Object.freeze({
+      material: f.lining.material,
+      thickness: mm(rule.thicknessMm),
+      source: f.lining.source,
+      basis: f.lining.basis,
+      ...(f.lining.spreadMm !== undefined ? { spread: mm(f.lining.spreadMm) } : {}),
+    })
+    : undefined;
+  const od = mm(row.outsideDiameterMm);
+  const wall = mm(wallMm);
+  const basis = weaker(f.basis, wallProv.basis);
+  const rec: PipeRecord = Object.freeze({
+    standard: f.standard,
+    standardId: f.id,
+    nps: row.nps,
+    nominalSize: value,
+    sizeLabel: f.sizeSystem === "NPS" ? `NPS ${row.nps}` : `${row.nps} in`,
+    schedule: key,
+    outsideDiameter: od,
+    wallThickness: wall,
+    insideDiameter: mm(row.outsideDiameterMm - 2 * wallMm),
+    material: f.material,
+    ...(lining ? { lining } : {}),
+    source: f.source,
+    basis,
+    ...(f.copy && (f.basis === "transcribed" || wallProv.basis === "transcribed")
+      ? { copy: f.copy }
+      : {}),
+    provenance: Object.freeze({
+      outsideDiameter: Object.freeze({ source: f.source, basis: f.basis }),
+      wallThickness: Object.freeze(wallProv),
+    }),
+  });
+  return rec;
 }

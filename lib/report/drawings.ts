@@ -342,23 +342,7 @@ export function svgAxialPath(o: AxialPathOptions): string {
     ? Math.min(0.09, Math.max(0.03, 0.4 * b.od))
     : positive("transducerLength", o.transducerLength);
 
-  // Path in metres: x along the axis from the entry point, y down from the top outer surface.
-  const pts: [number, number][] = [[0, 0]];
-  let x = b.wall * tw;
-  pts.push([x, b.wall]);
-  const yTopIn = b.wall + b.lining, yBotIn = b.od - b.wall - b.lining;
-  if (b.lining > 0) pts.push([x += b.lining * tl, yTopIn]);
-  let atTop = true;
-  for (let i = 0; i < n; i++) {
-    x += b.id * tf;
-    atTop = !atTop;
-    pts.push([x, atTop ? yTopIn : yBotIn]);
-  }
-  if (b.lining > 0) pts.push([x += b.lining * tl, atTop ? b.wall : b.od - b.wall]);
-  x += b.wall * tw;
-  pts.push([x, atTop ? 0 : b.od]);
-  const drawn = x;
-  const exitTop = atTop;
+  const { pts, drawn, exitTop } = beamPoints(b, n, tf, tw, tl);
 
   // Scale: fit the run of pipe into the width and the diameter into the height.
   const W = 720;
@@ -439,6 +423,57 @@ export function svgAxialPath(o: AxialPathOptions): string {
       text(xa, yFlow - 6, "flow", { size: 12 });
   }
   // Caption lines below.
+  axialNotes(o, b, n, drawn, spacing, unit).forEach((s, i) => {
+    out += text(30, yb + tH + 36 + i * 19, s, { size: 13, fill: i === 2 ? ACCENT : INK });
+  });
+  return svgDocument(
+    W,
+    H,
+    title,
+    `Longitudinal section of the pipe with the beam crossing the bore ${n} time(s) between ` +
+      `two transducers ${q(spacing, unit)} apart.`,
+    out,
+  );
+}
+
+/**
+ * The beam's corners in metres (x along the axis from the entry point, y down from the top
+ * outer surface): through wall, lining, n bore crossings, lining and wall; the axial span drawn
+ * and whether the beam leaves on the top surface.
+ */
+function beamPoints(
+  b: ReturnType<typeof bore>,
+  n: number,
+  tf: number,
+  tw: number,
+  tl: number,
+): { pts: [number, number][]; drawn: number; exitTop: boolean } {
+  const pts: [number, number][] = [[0, 0]];
+  let x = b.wall * tw;
+  pts.push([x, b.wall]);
+  const yTopIn = b.wall + b.lining, yBotIn = b.od - b.wall - b.lining;
+  if (b.lining > 0) pts.push([x += b.lining * tl, yTopIn]);
+  let atTop = true;
+  for (let i = 0; i < n; i++) {
+    x += b.id * tf;
+    atTop = !atTop;
+    pts.push([x, atTop ? yTopIn : yBotIn]);
+  }
+  if (b.lining > 0) pts.push([x += b.lining * tl, atTop ? b.wall : b.od - b.wall]);
+  x += b.wall * tw;
+  pts.push([x, atTop ? 0 : b.od]);
+  return { pts, drawn: x, exitTop: atTop };
+}
+
+/** Caption lines of the axial drawing: mounting and sizes, angles, a drawn/given spacing note. */
+function axialNotes(
+  o: AxialPathOptions,
+  b: ReturnType<typeof bore>,
+  n: number,
+  drawn: number,
+  spacing: number,
+  unit: string,
+): string[] {
   const notes = [
     `${mountingName(n)} mounting, ${n} traverse${n > 1 ? "s" : ""}; OD ${q(b.od, unit)}, ` +
     `wall ${q(b.wall, unit)}` +
@@ -454,17 +489,7 @@ export function svgAxialPath(o: AxialPathOptions): string {
         q(spacing, unit),
     );
   }
-  notes.forEach((s, i) => {
-    out += text(30, yb + tH + 36 + i * 19, s, { size: 13, fill: i === 2 ? ACCENT : INK });
-  });
-  return svgDocument(
-    W,
-    H,
-    title,
-    `Longitudinal section of the pipe with the beam crossing the bore ${n} time(s) between ` +
-      `two transducers ${q(spacing, unit)} apart.`,
-    out,
-  );
+  return notes;
 }
 
 /** Arguments of {@link svgRun}. */
@@ -650,35 +675,11 @@ export function svgRun(o: RunOptions): string {
   }
   // Axis in diameters.
   const yAxis = yPipe + ph / 2 + 40 + 15 * belowRows;
-  out += line(left, yAxis, right, yAxis, INK, 1);
-  const ticks = niceTicks(0, run / d, 8).filter((t) => t <= run / d + 1e-9);
-  for (const t of ticks) {
-    out += line(X(t * d), yAxis, X(t * d), yAxis + 5, INK, 1) +
-      text(X(t * d), yAxis + 18, formatCompact(t, 3), { anchor: "middle", size: 12 });
-  }
-  out += text(
-    right,
-    yAxis + 34,
-    `distance from the upstream fitting, in diameters (D = ${q(d, "mm", 4)})`,
-    { anchor: "end", size: 12 },
-  );
-  // Legend: the second key starts after the first key's text.
+  out += runAxis(left, right, yAxis, run, d, X);
+  // Legend.
   const ly = yAxis + 60;
   const H = ly + 16;
-  const firstKey = "straight length each fitting needs";
-  const x2 = left + 20 + textWidth(firstKey, 12) + 28;
-  out += `<rect x="${left}" y="${ly - 10}" width="14" height="12" fill="url(#keepclear)" ` +
-    `stroke="${INK}" stroke-width="0.5"/>` + text(left + 20, ly, firstKey, { size: 12 });
-  out += admissible
-    ? `<rect x="${c(x2)}" y="${ly - 10}" width="14" height="12" fill="#cfe3c4" stroke="${INK}" ` +
-      `stroke-width="0.5"/>` +
-      text(x2 + 20, ly, `admissible zone ${q(run - up - down, unit, 3)}`, { size: 12 })
-    : `<rect x="${c(x2)}" y="${ly - 10}" width="14" height="12" fill="${ACCENT}" ` +
-      `fill-opacity="0.35" stroke="${INK}" stroke-width="0.5"/>` +
-      text(x2 + 20, ly, `no admissible zone: the run is ${q(up + down - run, unit, 3)} short`, {
-        size: 12,
-        fill: ACCENT,
-      });
+  out += runLegend(left, ly, admissible, { run, up, down }, unit);
   return svgDocument(
     W,
     H,
@@ -691,4 +692,57 @@ export function svgRun(o: RunOptions): string {
       (cp !== undefined ? `; common-practice position ${fmtLen(cp)}` : "") + ".",
     out,
   );
+}
+
+/** The run drawing's axis in pipe diameters, with ticks and its caption. */
+function runAxis(
+  left: number,
+  right: number,
+  yAxis: number,
+  run: number,
+  d: number,
+  X: (m: number) => number,
+): string {
+  let out = line(left, yAxis, right, yAxis, INK, 1);
+  const ticks = niceTicks(0, run / d, 8).filter((t) => t <= run / d + 1e-9);
+  for (const t of ticks) {
+    out += line(X(t * d), yAxis, X(t * d), yAxis + 5, INK, 1) +
+      text(X(t * d), yAxis + 18, formatCompact(t, 3), { anchor: "middle", size: 12 });
+  }
+  out += text(
+    right,
+    yAxis + 34,
+    `distance from the upstream fitting, in diameters (D = ${q(d, "mm", 4)})`,
+    { anchor: "end", size: 12 },
+  );
+  return out;
+}
+
+/**
+ * The run drawing's legend: keep-clear hatch, and the admissible zone or by how much it is short;
+ * the second key starts after the first key's text.
+ */
+function runLegend(
+  left: number,
+  ly: number,
+  admissible: boolean,
+  lengths: { readonly run: number; readonly up: number; readonly down: number },
+  unit: string,
+): string {
+  const { run, up, down } = lengths;
+  const firstKey = "straight length each fitting needs";
+  const x2 = left + 20 + textWidth(firstKey, 12) + 28;
+  let out = `<rect x="${left}" y="${ly - 10}" width="14" height="12" fill="url(#keepclear)" ` +
+    `stroke="${INK}" stroke-width="0.5"/>` + text(left + 20, ly, firstKey, { size: 12 });
+  out += admissible
+    ? `<rect x="${c(x2)}" y="${ly - 10}" width="14" height="12" fill="#cfe3c4" stroke="${INK}" ` +
+      `stroke-width="0.5"/>` +
+      text(x2 + 20, ly, `admissible zone ${q(run - up - down, unit, 3)}`, { size: 12 })
+    : `<rect x="${c(x2)}" y="${ly - 10}" width="14" height="12" fill="${ACCENT}" ` +
+      `fill-opacity="0.35" stroke="${INK}" stroke-width="0.5"/>` +
+      text(x2 + 20, ly, `no admissible zone: the run is ${q(up + down - run, unit, 3)} short`, {
+        size: 12,
+        fill: ACCENT,
+      });
+  return out;
 }

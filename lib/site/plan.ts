@@ -10,22 +10,41 @@
  *
  * @module
  */
-import { InputError, NoPhysicalAnswerError, type Warning } from "../errors.ts";
-import { trace as traceEntry, type TraceEntry } from "../trace.ts";
+import type { Warning } from "../errors.ts";
+import type { TraceEntry } from "../trace.ts";
 import { defaultRegistry, type Registry } from "../registry/mod.ts";
-import { type ClampOnPath, type SearchWindow, techniqueScreening } from "../acoustics/mod.ts";
-import { gumPropagate, monteCarlo, type UncertainInput } from "../uncertainty/mod.ts";
-import { flowModel, MODEL_INPUTS } from "./model.ts";
+import type { ClampOnPath, SearchWindow } from "../acoustics/mod.ts";
+import { MODEL_INPUTS } from "./model.ts";
 import type { SiteInput } from "./schema.ts";
 
 export { PLAN_ASSUMPTIONS } from "./stages/assumptions.ts";
-import { ASSUMPTION_TEXT, PLAN_ASSUMPTIONS } from "./stages/assumptions.ts";
-import { planPipe } from "./stages/pipe.ts";
-import { planLiquid } from "./stages/liquid.ts";
-import { planOperatingPoints } from "./stages/points.ts";
-import { planTransducer } from "./stages/transducer.ts";
-import { planStraightRun } from "./stages/run.ts";
-import { planMountings } from "./stages/mountings.ts";
+import { type PipeStage, planPipe } from "./stages/pipe.ts";
+import { type LiquidStage, planLiquid } from "./stages/liquid.ts";
+import {
+  boreRoughness,
+  planOperatingPoints,
+  type PointsStage,
+  type PointsStageInput,
+  type RoughnessStage,
+  type RoughnessStageInput,
+} from "./stages/points.ts";
+import {
+  planTransducer,
+  type TransducerStage,
+  type TransducerStageInput,
+} from "./stages/transducer.ts";
+import { planStraightRun, type RunStage, type RunStageInput } from "./stages/run.ts";
+import {
+  type MountingsStage,
+  type MountingsStageInput,
+  planMountings,
+} from "./stages/mountings.ts";
+import { chooseMounting } from "./stages/choose.ts";
+import { type BudgetStage, type BudgetStageInput, planBudget } from "./stages/budget.ts";
+import { planVerdict, type VerdictStageInput } from "./stages/verdict.ts";
+import { type CautionsStageInput, planCautions } from "./stages/cautions.ts";
+import { assumptionTrace, planNotes } from "./stages/trace.ts";
+import { assemblePlan } from "./stages/assemble.ts";
 
 /** Options of {@link planSite}. */
 export interface PlanOptions {
@@ -356,506 +375,173 @@ export interface SitePlan {
  */
 export function planSite(site: SiteInput, options: PlanOptions = {}): SitePlan {
   const reg = options.registry ?? defaultRegistry();
-  const warnings: Warning[] = site.defaults.map((d) => ({ code: "default", message: d.message }));
-  const tr: TraceEntry[] = [];
-  const addTrace = (entries: readonly TraceEntry[] | undefined) => {
-    if (entries) { for (const e of entries) tr.push(e); }
-  };
-
-  // --- pipe --------------------------------------------------------------------------
-  const sp = site.pipe;
-  const pipeStage = planPipe({ pipe: sp, registry: reg });
-  warnings.push(...pipeStage.warnings);
-  addTrace(pipeStage.trace);
-  const { rp, mat, materialId, wallL, wallS, wallThickness, lining, insideDiameter, bore, area } =
-    pipeStage;
-  const T = site.fluid.temperature;
-
-  // --- fluid ---------------------------------------------------------------------------
-  const fl = site.fluid;
-  const liquidStage = planLiquid({ fluid: fl });
-  warnings.push(...liquidStage.warnings);
-  addTrace(liquidStage.trace);
-  const { liq, c, rho, nu, cSpread } = liquidStage;
-
-  // --- transducer ----------------------------------------------------------------------
-  const td = site.transducer;
-  const tdStage = planTransducer({ transducer: td, temperature: T, registry: reg });
-  warnings.push(...tdStage.warnings);
-  addTrace(tdStage.trace);
-  const { cw, dcwdT, cwHalf, wedgeDensity, wedgeAtt, timingResolution, zeroOffset, timingOffset } =
-    tdStage;
-
-  for (const [k, v] of Object.entries(PLAN_ASSUMPTIONS)) {
-    const [text, unit] = ASSUMPTION_TEXT[k as keyof typeof PLAN_ASSUMPTIONS];
-    tr.push(traceEntry(`plan assumption: ${text}`, v, unit, "common-practice", "common-practice"));
-  }
-
-  // --- operating points ----------------------------------------------------------------
-  const roughness = sp.roughness ?? mat.roughness ?? 0;
-  if (sp.roughness === undefined && mat.roughness === undefined) {
-    warnings.push({
-      code: "roughness",
-      message: `no roughness for ${materialId}: smooth bore assumed`,
-    });
-  }
-  const rr = roughness / bore;
-  const pointsStage = planOperatingPoints({ flow: site.flow, bore, area, roughness, nu });
-  const { points, profileFactorChange } = pointsStage;
-  for (const w of pointsStage.warnings) {
-    if (!warnings.some((x) => x.message === w.message)) warnings.push(w);
-  }
-  addTrace(pointsStage.trace);
-
-  // --- mountings -----------------------------------------------------------------------
-  const mStage = planMountings({
-    mountings: site.mountings,
-    rp,
-    wallThickness,
-    wallL,
-    wallS,
-    lining,
-    c,
-    cw,
-    td,
-    sp,
-    mat,
-    cSpread,
-    cwHalf,
-    dcwdT,
+  const notes = planNotes(site.defaults);
+  const pipe = notes.add(planPipe({ pipe: site.pipe, registry: reg }));
+  const liquid = notes.add(planLiquid({ fluid: site.fluid }));
+  const transducer = notes.add(planTransducer(transducerInput(site, reg)));
+  notes.add({ warnings: [], trace: assumptionTrace() });
+  const rough = notes.add(boreRoughness(roughnessInput(site, pipe)));
+  const points = notes.add(planOperatingPoints(pointsInput(site, pipe, liquid, rough)), true);
+  const mountings = notes.add(
+    planMountings(mountingsInput(site, pipe, liquid, transducer, points, reg)),
+    true,
+  );
+  const run = notes.add(planStraightRun(runInput(site, pipe, rough, points, mountings)));
+  const budget = notes.add(
+    planBudget(budgetInput(site, pipe, transducer, points, mountings, run, reg, options)),
+  );
+  const verdict = notes.add(planVerdict(verdictInput(site, points, run, budget)));
+  const { cautions } = planCautions(cautionsInput(site, pipe));
+  const { warnings } = notes;
+  return assemblePlan({
+    site,
+    registryHash: reg.hash,
+    pipe,
+    liquid,
+    transducer,
     points,
-    timingOffset,
-    T,
-    fl,
-    rho,
-    wedgeDensity,
-    wedgeAtt,
-    reg,
+    run,
+    budget,
+    verdict,
+    cautions,
+    trace: notes.trace(),
+    warnings,
   });
-  addTrace(mStage.trace);
-  const { mountingPlans, wallTolHalf, odHalf, tolOffsets } = mStage;
-  const budgetWarnings = mStage.warnings;
-  for (const w of budgetWarnings) {
-    if (!warnings.some((x) => x.message === w.message)) warnings.push(w);
-  }
+}
 
-  // --- straight run --------------------------------------------------------------------
-  // the mounting the run is ranked for: the first usable one by the rule below (V by default)
-  const provisional = chooseMounting(mountingPlans);
-  const runStage = planStraightRun({
+function transducerInput(site: SiteInput, registry: Registry): TransducerStageInput {
+  return { transducer: site.transducer, temperature: site.fluid.temperature, registry };
+}
+
+function roughnessInput(site: SiteInput, p: PipeStage): RoughnessStageInput {
+  return {
+    stated: site.pipe.roughness,
+    material: p.mat.roughness,
+    materialId: p.materialId,
+    bore: p.bore,
+  };
+}
+
+function pointsInput(
+  site: SiteInput,
+  p: PipeStage,
+  l: LiquidStage,
+  r: RoughnessStage,
+): PointsStageInput {
+  return { flow: site.flow, bore: p.bore, area: p.area, roughness: r.roughness, nu: l.nu };
+}
+
+function mountingsInput(
+  site: SiteInput,
+  p: PipeStage,
+  l: LiquidStage,
+  t: TransducerStage,
+  points: PointsStage,
+  reg: Registry,
+): MountingsStageInput {
+  return {
+    mountings: site.mountings,
+    sp: site.pipe,
+    fl: site.fluid,
+    td: site.transducer,
+    rp: p.rp,
+    mat: p.mat,
+    wallThickness: p.wallThickness,
+    wallL: p.wallL,
+    wallS: p.wallS,
+    lining: p.lining,
+    c: l.c,
+    cSpread: l.cSpread,
+    rho: l.rho,
+    T: site.fluid.temperature,
+    cw: t.cw,
+    cwHalf: t.cwHalf,
+    dcwdT: t.dcwdT,
+    wedgeDensity: t.wedgeDensity,
+    wedgeAtt: t.wedgeAtt,
+    timingOffset: t.timingOffset,
+    points: points.points,
+    reg,
+  };
+}
+
+/** The straight run is ranked for the mounting chosen before any budget (V by default). */
+function runInput(
+  site: SiteInput,
+  p: PipeStage,
+  r: RoughnessStage,
+  points: PointsStage,
+  m: MountingsStage,
+): RunStageInput {
+  const provisional = chooseMounting(m.mountingPlans);
+  return {
     run: site.run,
-    bore,
-    relativeRoughness: rr,
-    points,
+    bore: p.bore,
+    relativeRoughness: r.relativeRoughness,
+    points: points.points,
     traverses: provisional.traverses,
     fluidAngle: provisional.fluidAngle,
-  });
-  warnings.push(...runStage.warnings);
-  addTrace(runStage.trace);
-  const { straightRun, installHalf, installProvenance } = runStage;
-
-  // --- uncertainty ---------------------------------------------------------------------
-  const linThick = lining.reduce((s, l) => s + l.thickness, 0);
-  const budgetFor = (m: (typeof mountingPlans)[number], pi: number) => {
-    const p = points[pi];
-    const dt = m.times[pi].deltaT;
-    const path = m.path;
-    // uncertainty of the liquid time: fixed delay, plus wall and lining times' own uncertainty
-    const uWallTime = path.wallTime *
-      Math.hypot(wallTolHalf / wallThickness, (mat.longitudinalSpread ?? 0) / wallL) / Math.sqrt(3);
-    const uLinTime = path.liningTime *
-      Math.hypot(
-        PLAN_ASSUMPTIONS.liningThicknessRelative,
-        lining.some((l) => !l.overridden) ? PLAN_ASSUMPTIONS.liningSpeedRelative : 0,
-      ) /
-      Math.sqrt(3);
-    const uTau = Math.hypot(
-      PLAN_ASSUMPTIONS.fixedDelayHalfWidth / Math.sqrt(3),
-      uWallTime,
-      uLinTime,
-    );
-    const inputs: UncertainInput[] = [
-      u(
-        "outside diameter",
-        rp.outsideDiameter,
-        odHalf / Math.sqrt(3),
-        "rectangular",
-        "m",
-        rp.tolerances?.source ?? "common-practice",
-        rp.tolerances ? rp.tolerances.basis as UncertainInput["basis"] : "common-practice",
-        tolOffsets.outsideDiameter,
-      ),
-      u(
-        "wall thickness",
-        wallThickness,
-        wallTolHalf / Math.sqrt(3),
-        "rectangular",
-        "m",
-        sp.measuredWallThickness !== undefined
-          ? "common-practice"
-          : rp.tolerances?.source ?? "common-practice",
-        sp.measuredWallThickness !== undefined
-          ? "measured"
-          : rp.tolerances
-          ? rp.tolerances.basis as UncertainInput["basis"]
-          : "common-practice",
-        tolOffsets.wallThickness,
-      ),
-      u(
-        "lining thickness",
-        linThick,
-        PLAN_ASSUMPTIONS.liningThicknessRelative * linThick / Math.sqrt(3),
-        "rectangular",
-        "m",
-        "common-practice",
-        "common-practice",
-      ),
-      u(
-        "wedge sound speed",
-        cw,
-        Math.hypot(cwHalf, Math.abs(dcwdT) * PLAN_ASSUMPTIONS.wedgeTemperatureHalfWidth) /
-          Math.sqrt(3),
-        "rectangular",
-        "m/s",
-        td.wedgeMaterial ? reg.material(td.wedgeMaterial).source : "common-practice",
-        td.wedgeMaterial ? "recalled" : "common-practice",
-      ),
-      u(
-        "wedge angle",
-        td.wedgeAngle,
-        PLAN_ASSUMPTIONS.wedgeAngleHalfWidth / Math.sqrt(3),
-        "rectangular",
-        "rad",
-        "common-practice",
-        "common-practice",
-      ),
-      u(
-        "transit-time difference (zero offset, resolution)",
-        dt,
-        Math.hypot(zeroOffset / Math.sqrt(3), timingResolution / Math.sqrt(12)),
-        "normal",
-        "s",
-        "common-practice",
-        "input",
-      ),
-      u(
-        "time in the liquid (fixed delays)",
-        path.fluidTime,
-        uTau,
-        "normal",
-        "s",
-        "common-practice",
-        "common-practice",
-      ),
-      u(
-        "profile factor (model spread)",
-        p.profileFactor,
-        p.profileFactorSpread / Math.sqrt(3),
-        "rectangular",
-        "",
-        "common-practice",
-        "computed",
-      ),
-      u(
-        "installation effect (estimate)",
-        0,
-        installHalf / Math.sqrt(3),
-        "rectangular",
-        "",
-        installProvenance.source,
-        installProvenance.basis,
-      ),
-    ];
-    return { inputs, result: gumPropagate(flowModel, inputs) };
   };
-  for (const m of mountingPlans) {
-    (m as unknown as { expandedByPoint: number[] }).expandedByPoint = points.map((_p, i) =>
-      budgetFor(m, i).result.relativeExpanded ?? Infinity
-    );
-  }
-  const chosen = chooseMounting(mountingPlans);
-  const byPoint = chosen.expandedByPoint;
-  let worstIdx = 0;
-  byPoint.forEach((x, i) => {
-    if (x > byPoint[worstIdx]) worstIdx = i;
-  });
-  const reportIdx = points.findIndex((p) => p.label === "design") >= 0
-    ? points.findIndex((p) => p.label === "design")
-    : worstIdx;
-  const { inputs: repInputs, result: rep } = budgetFor(chosen, reportIdx);
-  const Q = rep.value;
-  const budget: PlanBudgetLine[] = rep.budget.map((b) => {
-    const inp = repInputs.find((x) => x.name === b.name)!;
-    return {
-      name: b.name,
-      value: b.value,
-      unit: inp.unit ?? "",
-      standardUncertainty: b.standardUncertainty,
-      distribution: b.distribution,
-      sensitivity: b.sensitivity,
-      relativeContribution: b.contribution / Math.abs(Q),
-      share: b.share,
-      source: inp.source ?? "",
-      basis: inp.basis ?? "",
-      ...(inp.centreOffset ? { centreOffset: inp.centreOffset } : {}),
-    };
-  });
-  let mc: SitePlan["uncertainty"]["monteCarlo"];
-  if (options.monteCarlo !== false) {
-    const draws = options.monteCarlo?.draws ?? 100_000;
-    const seed = options.monteCarlo?.seed ?? 1;
-    const r = monteCarlo(flowModel, repInputs, { draws, seed });
-    mc = {
-      draws: r.draws,
-      seed: r.seed,
-      expanded: (r.interval[1] - r.interval[0]) / 2 / Math.abs(Q),
-      interval: r.interval,
-    };
-  }
-  tr.push(
-    traceEntry(
-      "formulation: GUM law of propagation",
-      "JCGM 100:2008",
-      "",
-      "jcgm-100-2008",
-      "transcribed",
-    ),
-  );
-  if (mc) {
-    tr.push(
-      traceEntry(
-        "formulation: Monte Carlo propagation",
-        "JCGM 101:2008",
-        "",
-        "jcgm-101-2008",
-        "transcribed",
-      ),
-    );
-  }
+}
 
-  // --- verdict -------------------------------------------------------------------------
-  let target: SitePlan["target"];
-  const worst = byPoint[worstIdx];
-  if (site.targetUncertainty !== undefined) {
-    const reachable = worst <= site.targetUncertainty;
-    const suggestions: string[] = [];
-    if (!reachable) {
-      const { result: wr } = budgetFor(chosen, worstIdx);
-      const top = wr.budget.slice(0, 3).map((b) => b.name);
-      for (const name of top) {
-        suggestions.push(...suggestionFor(name, straightRun, chosen.traverses));
-      }
-      for (const m of mountingPlans) {
-        if (m !== chosen && Math.max(...m.expandedByPoint) <= site.targetUncertainty) {
-          suggestions.push(`the ${m.name} mounting (${m.traverses} traverses) reaches the target`);
-        }
-      }
-      if (suggestions.length === 0) suggestions.push("no single change found: review the budget");
-    }
-    target = {
-      uncertainty: site.targetUncertainty,
-      reachable,
-      worstExpanded: worst,
-      worstPoint: points[worstIdx].label,
-      suggestions: [...new Set(suggestions)],
-    };
-  }
-  const technique = techniqueScreening({
-    solidsFraction: site.content?.solids,
-    gasFraction: site.content?.gas,
-  });
-  if (technique.favours === "doppler") {
-    warnings.push({
-      code: "technique",
-      message: `transit time is unlikely to work here: ${technique.reasons.join("; ")}`,
-    });
-  }
-  const mainLimitation = budget[0]?.name ?? "";
-
-  // --- cautions ------------------------------------------------------------------------
-  const cautions = cautionsFor(T, fl.pressure, fl.liquid, lining.length > 0);
-
-  const { path: _p, inputs: _i, ...chosenRest } = chosen;
-  void chosenRest;
+function budgetInput(
+  site: SiteInput,
+  p: PipeStage,
+  t: TransducerStage,
+  points: PointsStage,
+  m: MountingsStage,
+  run: RunStage,
+  reg: Registry,
+  options: PlanOptions,
+): BudgetStageInput {
   return {
-    name: site.name,
-    id: site.id,
-    invented: site.invented ?? false,
-    registryHash: reg.hash,
-    pipe: {
-      outsideDiameter: rp.outsideDiameter,
-      wallThickness,
-      insideDiameter,
-      boreDiameter: bore,
-      material: materialId,
-      wallSoundSpeed: wallL,
-      wallShearSpeed: wallS,
-      lining: lining.map(({ material, thickness, soundSpeed }) => ({
-        material,
-        thickness,
-        soundSpeed,
-      })),
-      description: rp.origin === "catalogue"
-        ? `${rp.standard} NPS ${rp.nps} schedule ${rp.schedule}`
-        : "measured pipe",
-      measuredWallThickness: sp.measuredWallThickness,
-    },
-    fluid: {
-      liquid: fl.liquid,
-      name: liq.name,
-      temperature: T,
-      pressure: fl.pressure,
-      soundSpeed: c,
-      soundSpeedSpread: cSpread,
-      density: rho,
-      kinematicViscosity: nu,
-    },
-    transducer: {
-      wedgeSoundSpeed: cw,
-      wedgeAngle: td.wedgeAngle,
-      frequency: td.frequency,
-      timingResolution,
-      zeroOffset,
-    },
-    operatingPoints: points,
-    profileFactorChange,
-    mountings: mountingPlans.map(({ path: _x, inputs: _y, ...m }) => m),
-    recommendedMounting: chosen.traverses,
-    straightRun,
-    uncertainty: {
-      mounting: chosen.traverses,
-      operatingPoint: points[reportIdx].label,
-      expanded: rep.relativeExpanded ?? Infinity,
-      coverageFactor: rep.coverageFactor,
-      expandedByPoint: points.map((p, i) => ({ label: p.label, expanded: byPoint[i] })),
-      budget,
-      monteCarlo: mc,
-    },
-    target,
-    technique: { favours: technique.favours, reasons: technique.reasons },
-    mainLimitation,
-    trace: dedupeTrace(tr),
-    cautions,
-    warnings,
+    sp: site.pipe,
+    td: site.transducer,
+    rp: p.rp,
+    mat: p.mat,
+    wallThickness: p.wallThickness,
+    wallL: p.wallL,
+    lining: p.lining,
+    cw: t.cw,
+    cwHalf: t.cwHalf,
+    dcwdT: t.dcwdT,
+    zeroOffset: t.zeroOffset,
+    timingResolution: t.timingResolution,
+    wallTolHalf: m.wallTolHalf,
+    odHalf: m.odHalf,
+    tolOffsets: m.tolOffsets,
+    mountingPlans: m.mountingPlans,
+    installHalf: run.installHalf,
+    installProvenance: run.installProvenance,
+    points: points.points,
+    reg,
+    monteCarlo: options.monteCarlo,
   };
 }
 
-function u(
-  name: string,
-  value: number,
-  standardUncertainty: number,
-  distribution: UncertainInput["distribution"],
-  unit: string,
-  source: string,
-  basis: UncertainInput["basis"],
-  centreOffset = 0,
-): UncertainInput {
-  const input = { name, value, standardUncertainty, distribution, unit, source, basis };
-  return centreOffset === 0 ? input : { ...input, centreOffset };
+function verdictInput(
+  site: SiteInput,
+  points: PointsStage,
+  run: RunStage,
+  b: BudgetStage,
+): VerdictStageInput {
+  return {
+    targetUncertainty: site.targetUncertainty,
+    content: site.content,
+    points: points.points,
+    mountingPlans: b.mountingPlans,
+    chosen: b.chosen,
+    worstIdx: b.worstIdx,
+    worstBudget: b.worstBudget,
+    budget: b.uncertainty.budget.map((l) => l.name),
+    straightRun: run.straightRun,
+  };
 }
 
-/**
- * The mounting the budget is for (common practice): among mountings whose signal is not weak and
- * whose wall-borne signal does not overlap, those resolvable at minimum flow (else all usable
- * ones) whose worst expanded uncertainty is within 5 % of the lowest; of these, an even traverse
- * count first (both transducers on one side, and the two bore crossings cancel a transverse flow
- * component), then the fewest traverses (the strongest signal). If none is usable, the first given.
- */
-function chooseMounting<T extends MountingPlan>(plans: readonly T[]): T {
-  if (plans.length === 0) throw new InputError("mountings", "none", "at least one traverse count");
-  const usable = plans.filter((m) => m.signal.rating !== "weak" && !m.wallBorne.overlaps);
-  if (usable.length === 0) return plans[0];
-  const resolvable = usable.filter((m) => m.resolvableAtMinimum);
-  const pool = resolvable.length ? resolvable : usable;
-  const worst = (m: T) => (m.expandedByPoint.length ? Math.max(...m.expandedByPoint) : 0);
-  const lowest = Math.min(...pool.map(worst));
-  const good = pool.filter((m) => worst(m) <= lowest * 1.05);
-  return [...good].sort((a, b) =>
-    (a.traverses % 2) - (b.traverses % 2) || a.traverses - b.traverses
-  )[0];
-}
-
-function suggestionFor(
-  name: string,
-  run: SitePlan["straightRun"],
-  traverses: number,
-): string[] {
-  if (name.startsWith("installation")) {
-    const s = ["a longer straight run upstream, or a location further from the upstream fitting"];
-    if (run && run.position !== run.recommendedPosition) {
-      s.push(
-        `move to the recommended position ${
-          run.recommendedPosition.toFixed(2)
-        } m from the upstream fitting`,
-      );
-    }
-    return s;
-  }
-  if (name.startsWith("wall thickness")) return ["measure the wall with a thickness gauge"];
-  if (name.startsWith("outside diameter")) return ["measure the circumference with a tape"];
-  if (name.startsWith("lining")) {
-    return ["measure the lining thickness (for example at a cut or a fitting)"];
-  }
-  if (name.startsWith("transit-time difference")) {
-    return [`more traverses than ${traverses} (a longer path gives a larger Δt), or finer timing`];
-  }
-  if (name.startsWith("profile factor")) {
-    return ["a multi-path arrangement, or a site with Reynolds number out of transition"];
-  }
-  if (name.startsWith("wedge")) return ["check the transducers' wedge data and temperature"];
-  if (name.startsWith("time in the liquid")) return ["zero the fixed delays on site"];
-  return [];
-}
-
-function cautionsFor(T: number, p: number, liquid: string, lined: boolean): string[] {
-  const out = [
-    "Plans are estimates: installation-effect figures come from a model, not a calibration.",
-    "Follow the site's permit-to-work system, local codes and licensed practice; they take precedence over this plan.",
-  ];
-  if (T > 333.15) {
-    out.push(
-      `Hot line (${
-        (T - 273.15).toFixed(0)
-      } °C): burn hazard; let lagging and surfaces be checked before contact.`,
-    );
-  }
-  if (T < 273.15 + 5) out.push("Cold line: condensation and ice; frost-burn hazard on bare metal.");
-  if (p > 1e6) {
-    out.push(
-      `Pressurised line (${
-        (p / 1e5).toFixed(1)
-      } bar absolute): never loosen fittings or tapping points.`,
-    );
-  }
-  out.push(
-    "Lifting insulation or lagging may expose hot surfaces or hazardous fibres: have it surveyed first.",
-  );
-  out.push(
-    "Pits, chambers and vaults are confined spaces: gas test, permit and standby person first.",
-  );
-  if (!["water", "seawater"].includes(liquid)) {
-    out.push(
-      `Process liquid (${liquid}): check the hazardous-area classification and use certified equipment.`,
-    );
-  }
-  if (lined) {
-    out.push("Lined pipe: do not cut or drill to check the lining; use records or a fitting.");
-  }
-  return out;
-}
-
-function dedupeTrace(tr: readonly TraceEntry[]): TraceEntry[] {
-  const seen = new Set<string>();
-  const out: TraceEntry[] = [];
-  for (const t of tr) {
-    const k = `${t.quantity}|${t.value}|${t.source}`;
-    if (seen.has(k)) continue;
-    seen.add(k);
-    out.push(t);
-  }
-  return out;
+function cautionsInput(site: SiteInput, p: PipeStage): CautionsStageInput {
+  const { temperature, pressure, liquid } = site.fluid;
+  return { temperature, pressure, liquid, lined: p.lining.length > 0 };
 }
 
 /** Re-exported for reports: the model's input names, in order. */
 export const PLAN_MODEL_INPUTS: readonly string[] = MODEL_INPUTS;
-void NoPhysicalAnswerError;

@@ -129,9 +129,6 @@ export function planMountings(input: MountingsStageInput): MountingsStage {
     td,
     sp,
     mat,
-    cSpread,
-    cwHalf,
-    dcwdT,
     points,
     timingOffset,
     T,
@@ -169,25 +166,7 @@ export function planMountings(input: MountingsStageInput): MountingsStage {
   for (const n of mountings) {
     const inputs = baseInputs(n);
     const path = clampOnPath(inputs);
-    const win = searchWindow(inputs, {
-      fluidSoundSpeed: cSpread,
-      wallThickness: wallTolHalf,
-      wallSoundSpeed: sp.wallSoundSpeed !== undefined ? 0 : mat.longitudinalSpread ?? 0,
-      wallShearSpeed: sp.wallShearSpeed !== undefined ? 0 : mat.shearSpread ?? 0,
-      wedgeSoundSpeed: cwHalf,
-      wedgeAngle: PLAN_ASSUMPTIONS.wedgeAngleHalfWidth,
-      ...(lining.length
-        ? { liningThickness: PLAN_ASSUMPTIONS.liningThicknessRelative * lining[0].thickness }
-        : {}),
-      ...(dcwdT !== 0
-        ? {
-          wedgeTemperature: {
-            uncertainty: PLAN_ASSUMPTIONS.wedgeTemperatureHalfWidth,
-            dSoundSpeedDT: dcwdT,
-          },
-        }
-        : {}),
-    });
+    const win = searchWindow(inputs, windowHalfWidths(input, wallTolHalf));
     const times = points.map((p) => {
       const t = transitTimes(path, p.pathVelocity);
       return { label: p.label, upstream: t.upstream, downstream: t.downstream, deltaT: t.deltaT };
@@ -207,28 +186,7 @@ export function planMountings(input: MountingsStageInput): MountingsStage {
         return { density: lm.density, attenuation: lm.attenuation };
       }),
     }, { extrapolate: true, warnings: budgetWarnings });
-    let overTemperature: NonNullable<MountingPlan["overTemperature"]>[number][] | undefined;
-    if (fl.temperatureRange) {
-      const { min, max } = fl.temperatureRange;
-      overTemperature = [];
-      for (let i = 0; i <= 6; i++) {
-        const Ti = min + (max - min) * i / 6;
-        const ci = fl.soundSpeed ?? liquidProperties(fl.liquid, Ti, fl.pressure, {
-          salinity: fl.salinity,
-          formulation: fl.formulation,
-          extrapolate: true,
-          warnings: [],
-        }).soundSpeed;
-        const cwi = cw + dcwdT * (Ti - T);
-        const pi = clampOnPath({ ...inputs, fluidSoundSpeed: ci, wedgeSoundSpeed: cwi });
-        overTemperature.push({
-          temperature: Ti,
-          spacing: pi.spacing,
-          fluidSoundSpeed: ci,
-          totalTime: pi.totalTime,
-        });
-      }
-    }
+    const overTemperature = spacingOverTemperature(input, inputs);
     mountingPlans.push({
       traverses: n,
       name: mountingName(n),
@@ -265,4 +223,63 @@ export function planMountings(input: MountingsStageInput): MountingsStage {
     outsideDiameter: centreOffsetTol(rp.tolerances?.outsideDiameter),
   };
   return { mountingPlans, wallTolHalf, odHalf, tolOffsets, warnings: budgetWarnings, trace: tr };
+}
+
+/** The half-widths the search window spans (m, m/s, rad, K): site values known exactly get 0. */
+function windowHalfWidths(
+  input: MountingsStageInput,
+  wallTolHalf: number,
+): Parameters<typeof searchWindow>[1] {
+  const { sp, mat, cSpread, cwHalf, lining, dcwdT } = input;
+  return {
+    fluidSoundSpeed: cSpread,
+    wallThickness: wallTolHalf,
+    wallSoundSpeed: sp.wallSoundSpeed !== undefined ? 0 : mat.longitudinalSpread ?? 0,
+    wallShearSpeed: sp.wallShearSpeed !== undefined ? 0 : mat.shearSpread ?? 0,
+    wedgeSoundSpeed: cwHalf,
+    wedgeAngle: PLAN_ASSUMPTIONS.wedgeAngleHalfWidth,
+    ...(lining.length
+      ? { liningThickness: PLAN_ASSUMPTIONS.liningThicknessRelative * lining[0].thickness }
+      : {}),
+    ...(dcwdT !== 0
+      ? {
+        wedgeTemperature: {
+          uncertainty: PLAN_ASSUMPTIONS.wedgeTemperatureHalfWidth,
+          dSoundSpeedDT: dcwdT,
+        },
+      }
+      : {}),
+  };
+}
+
+/**
+ * Spacing at seven temperatures across the site's seasonal range (undefined without one): the
+ * liquid's sound speed at each (or the stated one), the wedge's by c_w + dc/dT·(T − T_line).
+ */
+function spacingOverTemperature(
+  input: MountingsStageInput,
+  inputs: ClampOnInputs,
+): MountingPlan["overTemperature"] {
+  const { fl, cw, dcwdT, T } = input;
+  if (!fl.temperatureRange) return undefined;
+  const { min, max } = fl.temperatureRange;
+  const overTemperature: NonNullable<MountingPlan["overTemperature"]>[number][] = [];
+  for (let i = 0; i <= 6; i++) {
+    const Ti = min + (max - min) * i / 6;
+    const ci = fl.soundSpeed ?? liquidProperties(fl.liquid, Ti, fl.pressure, {
+      salinity: fl.salinity,
+      formulation: fl.formulation,
+      extrapolate: true,
+      warnings: [],
+    }).soundSpeed;
+    const cwi = cw + dcwdT * (Ti - T);
+    const pi = clampOnPath({ ...inputs, fluidSoundSpeed: ci, wedgeSoundSpeed: cwi });
+    overTemperature.push({
+      temperature: Ti,
+      spacing: pi.spacing,
+      fluidSoundSpeed: ci,
+      totalTime: pi.totalTime,
+    });
+  }
+  return overTemperature;
 }

@@ -100,3 +100,52 @@ export function planOperatingPoints(input: PointsStageInput): PointsStage {
   ];
   return { points, profileFactorChange, warnings, trace };
 }
+
+/** Input of {@link boreRoughness}. */
+export interface RoughnessStageInput {
+  /** Roughness stated in the site file, m. */
+  readonly stated: number | undefined;
+  /** Roughness of the wall material in the registry, m. */
+  readonly material: number | undefined;
+  /** Wall material id (for the warning). */
+  readonly materialId: string;
+  /** Bore, m. */
+  readonly bore: number;
+}
+
+/** Output of {@link boreRoughness}. */
+export interface RoughnessStage {
+  /** Absolute roughness, m. */
+  readonly roughness: number;
+  /** Relative roughness ε/D. */
+  readonly relativeRoughness: number;
+  /** A warning when neither the site nor the registry gives one (smooth bore assumed). */
+  readonly warnings: Warning[];
+  /** Trace of this stage (none). */
+  readonly trace: TraceEntry[];
+}
+
+/**
+ * The bore's roughness: the site's, else the material's, else a smooth bore with a warning.
+ *
+ * @param input stated and material roughness (m), material id, bore (m)
+ * @returns absolute (m) and relative roughness
+ * @example
+ * ```ts
+ * import { boreRoughness } from "./points.ts";
+ * const r = boreRoughness({ stated: undefined, material: 4.5e-5, materialId: "x", bore: 0.2 });
+ * // ε/D = 45 µm / 200 mm
+ * if (Math.abs(r.relativeRoughness - 2.25e-4) > 1e-15 || r.warnings.length) throw new Error();
+ * ```
+ */
+export function boreRoughness(input: RoughnessStageInput): RoughnessStage {
+  const roughness = input.stated ?? input.material ?? 0;
+  const warnings: Warning[] = [];
+  if (input.stated === undefined && input.material === undefined) {
+    warnings.push({
+      code: "roughness",
+      message: `no roughness for ${input.materialId}: smooth bore assumed`,
+    });
+  }
+  return { roughness, relativeRoughness: roughness / input.bore, warnings, trace: [] };
+}
