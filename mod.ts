@@ -14,6 +14,9 @@ export * from "./lib/errors.ts";
 export * from "./lib/units.ts";
 export * from "./lib/trace.ts";
 export * from "./lib/registry/mod.ts";
+// the full validator, so that loadRegistry validates any folder synchronously (scripts use
+// lib/registry/mod.ts, which loads it only when the bundled snapshot is stale)
+import "./lib/registry/load.ts";
 export * from "./lib/pipe/mod.ts";
 export * from "./lib/water/mod.ts";
 export * from "./lib/liquids/mod.ts";

@@ -2,7 +2,8 @@
  * Registry load time (aim: under 50 ms for the whole data folder; the snapshot path is the
  * start-up path, full validation runs when the YAML changed) and catalogue lookups.
  */
-import { createRegistry, DATA_DIR, defaultRegistry, loadRegistry } from "../lib/registry/mod.ts";
+import { createRegistry, DATA_DIR, defaultRegistry } from "../lib/registry/mod.ts";
+import { loadRegistry } from "../lib/registry/load.ts";
 import { pipe } from "../lib/pipe/mod.ts";
 
 Deno.bench("registry: load (validated snapshot when current)", {

@@ -12,11 +12,13 @@ const HELP = `
 bench_commands — wall time of whole commands as a ratio to bare Deno start-up
 
 Usage:
-  deno task bench:commands [--runs 9] [--json]
+  deno task bench:commands [--runs 9] [--baseline DIR] [--json]
 
 Options:
-  --runs N     runs of each command, taken in turn (default 9, at least 7); medians reported
-  --json       machine-readable output
+  --runs N        runs of each command, taken in turn (default 9, at least 7); medians reported
+  --baseline DIR  also run each script command from another checkout (an earlier commit, for
+                  example from 'git archive'), in turn with ours, and report ours / baseline
+  --json          machine-readable output
   -h, --help   this help
 
 Times each command as a child process from spawn to exit. The baseline is 'deno eval 0' with the
@@ -32,6 +34,10 @@ interface Case {
   script?: string;
   /** Goal: at most this many times bare start-up. */
   goal?: number;
+  /** Working folder of the child (default: this one). */
+  cwd?: string;
+  /** Index of the case this one is the baseline of. */
+  baselineOf?: number;
 }
 
 const CASES: Case[] = [
@@ -69,10 +75,17 @@ function median(xs: number[]): number {
   return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
 }
 
-async function timeOnce(args: string[]): Promise<{ ms: number; ok: boolean; err: string }> {
+async function timeOnce(
+  args: string[],
+  cwd?: string,
+): Promise<{ ms: number; ok: boolean; err: string }> {
   const t0 = performance.now();
-  const out = await new Deno.Command(Deno.execPath(), { args, stdout: "null", stderr: "piped" })
-    .output();
+  const out = await new Deno.Command(Deno.execPath(), {
+    args,
+    cwd,
+    stdout: "null",
+    stderr: "piped",
+  }).output();
   const ms = performance.now() - t0;
   return { ms, ok: out.success, err: new TextDecoder().decode(out.stderr).trim().split("\n")[0] };
 }
@@ -86,7 +99,10 @@ function exists(path: string): boolean {
 }
 
 runMain(async () => {
-  const { values } = parseCli(Deno.args, { runs: { type: "string" } }, HELP);
+  const { values } = parseCli(Deno.args, {
+    runs: { type: "string" },
+    baseline: { type: "string" },
+  }, HELP);
   const runs = values.runs === undefined ? 9 : Number(values.runs);
   if (!Number.isInteger(runs) || runs < 7) {
     throw new InputError("--runs", String(values.runs), "an integer >= 7");
@@ -97,25 +113,42 @@ runMain(async () => {
     notices.push(`${c.script} not found: "${c.name}" skipped`);
     return false;
   });
+  const baseline = values.baseline as string | undefined;
+  if (baseline !== undefined) {
+    const n = cases.length;
+    for (let i = 1; i < n; i++) {
+      const c = cases[i];
+      if (!exists(`${baseline}/${c.script}`)) {
+        notices.push(`${baseline}/${c.script} not found: no baseline for "${c.name}"`);
+        continue;
+      }
+      cases.push({ name: `${c.name} [baseline]`, args: c.args, cwd: baseline, baselineOf: i });
+    }
+  }
   // One warm-up each (module cache, type-check cache), then runs taken in turn.
   for (const c of cases) {
-    const r = await timeOnce(c.args);
+    const r = await timeOnce(c.args, c.cwd);
     if (!r.ok) throw new Error(`"${c.name}" failed: ${r.err}`);
   }
   const times: number[][] = cases.map(() => []);
   for (let r = 0; r < runs; r++) {
-    for (let i = 0; i < cases.length; i++) times[i].push((await timeOnce(cases[i].args)).ms);
+    for (let i = 0; i < cases.length; i++) {
+      times[i].push((await timeOnce(cases[i].args, cases[i].cwd)).ms);
+    }
   }
   const base = median(times[0]);
   const rows = cases.map((c, i) => {
     const ms = median(times[i]);
     const ratio = ms / base;
+    const twin = cases.findIndex((b) => b.baselineOf === i);
     return {
       name: c.name,
       medianMs: ms,
       ratio,
       goal: c.goal ?? null,
       met: c.goal === undefined ? null : ratio <= c.goal,
+      /** Ours / baseline checkout, when one was timed. */
+      vsBaseline: twin < 0 ? null : ms / median(times[twin]),
     };
   });
   if (values.json) {
@@ -126,8 +159,11 @@ runMain(async () => {
   console.log(`medians of ${runs} runs taken in turn; ratio = command / bare start-up\n`);
   for (const r of rows) {
     const goal = r.goal === null ? "" : `  (goal <= ${r.goal}x: ${r.met ? "met" : "not met"})`;
+    const vs = r.vsBaseline === null ? "" : `  ${r.vsBaseline.toFixed(2)} of baseline`;
     console.log(
-      `${r.name.padEnd(44)} ${r.medianMs.toFixed(0).padStart(6)} ms  ${r.ratio.toFixed(2)}x${goal}`,
+      `${r.name.padEnd(56)} ${r.medianMs.toFixed(0).padStart(6)} ms  ${
+        r.ratio.toFixed(2)
+      }x${goal}${vs}`,
     );
   }
   return 0;

@@ -8,18 +8,19 @@ import { InputError, SnellpathError } from "../lib/errors.ts";
 import { defaultRegistry } from "../lib/registry/mod.ts";
 import { readSiteFile, readSitesCsvText, siteFiles, streamSitesCsv } from "../lib/site/read.ts";
 import type { SiteInput } from "../lib/site/schema.ts";
-import { planSite, type SitePlan } from "../lib/site/plan.ts";
+import { planSite } from "../lib/site/plan.ts";
 import { type FieldReadings, reconcile } from "../lib/site/reconcile.ts";
+import { fleetCsv, fleetHtml, fleetRow } from "../lib/report/plan_report.ts";
 import {
-  fleetCsv,
-  fleetHtml,
-  fleetRow,
-  planHtml,
-  planJson,
-  planMarkdown,
-  planText,
-} from "../lib/report/plan_report.ts";
-import { formatCard } from "../lib/report/card.ts";
+  type Format,
+  FORMATS,
+  type FromWorker,
+  type JobOptions,
+  type JobResult,
+  planJob,
+  render,
+  type ToWorker,
+} from "./_worker.ts";
 import { parseCli, runMain } from "./_cli.ts";
 
 const HELP = `
@@ -39,6 +40,8 @@ options:
   --seed N            Monte Carlo seed (default 1)
   --registry-hash H   refuse to plan unless the reference data hash is H
   --readings FILE     readings taken on site (YAML/JSON, docs/readings.md): reconcile them
+  --jobs N            plan a fleet on N threads (Web Workers; default: the core count); the
+                      reports and their order are the same whatever N (1: no workers)
   --quiet             no progress lines on standard error
   --json              same as --format json
   --debug             print the stack trace of an error
@@ -56,8 +59,6 @@ examples:
   deno task plan -- sites.csv --format csv --out out/fleet
 `;
 
-const FORMATS = ["text", "json", "md", "html", "csv", "card"] as const;
-type Format = typeof FORMATS[number];
 const EXT: Record<Format, string> = {
   text: "txt",
   json: "json",
@@ -118,6 +119,111 @@ class RowError extends SnellpathError {
   }
 }
 
+/** One fleet entry in input order: a site to plan, or the reason it could not be read. */
+interface Item {
+  readonly label: string;
+  readonly site?: SiteInput;
+  readonly error?: SnellpathError;
+}
+
+/**
+ * Web Workers running scripts/_worker.ts. Sites go to the least busy worker; outcomes are handed
+ * to `finish` strictly in submission order (a reorder buffer), so output is the same as with one
+ * thread. At most a few sites per worker are in flight (a long CSV is not read ahead).
+ */
+class WorkerPool {
+  readonly #workers: Worker[] = [];
+  readonly #busy: number[] = [];
+  readonly #waiting = new Map<number, { item: Item; result?: JobResult; done: boolean }>();
+  #nextSeq = 0;
+  #nextOut = 0;
+  #failure: Error | undefined;
+  #wake: (() => void) | undefined;
+  #chain: Promise<void> = Promise.resolve();
+
+  constructor(
+    n: number,
+    options: JobOptions,
+    readonly finish: (item: Item, result: JobResult | undefined) => Promise<void>,
+  ) {
+    for (let i = 0; i < n; i++) {
+      const w = new Worker(new URL("./_worker.ts", import.meta.url), { type: "module" });
+      w.postMessage({ kind: "options", options } satisfies ToWorker);
+      w.onmessage = (ev: MessageEvent<FromWorker>) => this.#answer(i, ev.data);
+      w.onerror = (ev) => {
+        ev.preventDefault();
+        this.#fail(new Error(`plan worker failed: ${ev.message}`));
+      };
+      this.#workers.push(w);
+      this.#busy.push(0);
+    }
+  }
+
+  #fail(e: Error) {
+    this.#failure ??= e;
+    this.#wake?.();
+  }
+
+  #answer(worker: number, m: FromWorker) {
+    this.#busy[worker]--;
+    if (m.kind === "crash") return this.#fail(new Error(m.message));
+    const w = this.#waiting.get(m.seq)!;
+    w.result = m.result;
+    w.done = true;
+    this.#flush();
+  }
+
+  /** Hand finished outcomes to `finish` in order (one at a time: writes stay ordered). */
+  #flush() {
+    this.#chain = this.#chain.then(async () => {
+      for (;;) {
+        const w = this.#waiting.get(this.#nextOut);
+        if (!w?.done) break;
+        this.#waiting.delete(this.#nextOut++);
+        await this.finish(w.item, w.result);
+      }
+    }).catch((e) => this.#fail(e)).finally(() => this.#wake?.());
+  }
+
+  async #room() {
+    while (!this.#failure && this.#waiting.size >= this.#workers.length * 4) {
+      await new Promise<void>((r) => (this.#wake = r));
+    }
+    if (this.#failure) throw this.#failure;
+  }
+
+  /** Plan a site on the least busy worker. */
+  async submit(item: Item) {
+    await this.#room();
+    const seq = this.#nextSeq++;
+    this.#waiting.set(seq, { item, done: false });
+    let best = 0;
+    for (let i = 1; i < this.#busy.length; i++) if (this.#busy[i] < this.#busy[best]) best = i;
+    this.#busy[best]++;
+    this.#workers[best].postMessage({ kind: "site", seq, site: item.site! } satisfies ToWorker);
+  }
+
+  /** Queue an entry that needs no planning (a site that could not be read). */
+  async submitDone(item: Item) {
+    await this.#room();
+    this.#waiting.set(this.#nextSeq++, { item, done: true });
+    this.#flush();
+  }
+
+  /** Wait until every submitted entry was finished. */
+  async drain() {
+    while (!this.#failure && (this.#waiting.size > 0)) {
+      await new Promise<void>((r) => (this.#wake = r));
+    }
+    await this.#chain;
+    if (this.#failure) throw this.#failure;
+  }
+
+  close() {
+    for (const w of this.#workers) w.terminate();
+  }
+}
+
 async function main(): Promise<number> {
   const { values, positionals } = parseCli(Deno.args, {
     format: { type: "string" },
@@ -129,6 +235,7 @@ async function main(): Promise<number> {
     "registry-hash": { type: "string" },
     readings: { type: "string" },
     quiet: { type: "boolean" },
+    jobs: { type: "string" },
   }, HELP);
   const format = (values.json ? "json" : (values.format as string | undefined) ?? "text") as Format;
   if (!FORMATS.includes(format)) {
@@ -152,6 +259,7 @@ async function main(): Promise<number> {
   };
   const draws = intOpt("draws", 100_000, 1000, 10_000_000);
   const seed = intOpt("seed", 1, 0, 2 ** 31 - 1);
+  const jobs = intOpt("jobs", Math.max(1, navigator.hardwareConcurrency || 1), 1, 256);
   const reg = defaultRegistry();
   const pin = values["registry-hash"] as string | undefined;
   if (pin !== undefined && pin !== reg.hash) {
@@ -225,9 +333,17 @@ async function main(): Promise<number> {
     console.error(`planned ${count}${total ? `/${total}` : ""} sites (${refused} refused)`);
   };
 
-  async function handle(site: SiteInput | undefined, label: string, error?: SnellpathError) {
+  const jobOptions: JobOptions = {
+    monteCarlo: mcOn ? { draws, seed } : false,
+    format,
+    outIsDir,
+  };
+
+  /** Report one site's outcome; called in input order whatever thread planned it. */
+  async function finish(item: Item, result: JobResult | undefined) {
     count++;
-    if (error || !site) {
+    const { site, label, error } = item;
+    if (error || !site || !result) {
       refused++;
       worstCode = Math.max(worstCode, error?.exitCode ?? 2);
       const msg = error?.message ?? "refused";
@@ -239,62 +355,93 @@ async function main(): Promise<number> {
       summary.push({ id: label, name: label, error: error?.message ?? "refused" });
       return;
     }
-    let plan: SitePlan;
-    try {
-      plan = planSite(site, { registry: reg, monteCarlo: mcOn ? { draws, seed } : false });
-    } catch (e) {
-      if (!(e instanceof SnellpathError)) throw e;
+    if (!result.ok) {
       refused++;
-      worstCode = Math.max(worstCode, e.exitCode);
+      worstCode = Math.max(worstCode, result.exitCode);
       console.error(
         `error: ${site.source.file}${
           site.source.row ? ` row ${site.source.row}` : ""
-        }: ${e.message}`,
+        }: ${result.message}`,
       );
-      summary.push({ id: site.id ?? label, name: site.name, error: e.message });
+      summary.push({ id: site.id ?? label, name: site.name, error: result.message });
       return;
     }
     let base = safeName(site.id ?? site.name);
     while (usedNames.has(base)) base += "-x";
     usedNames.add(base);
     const href = `${base}.${format === "csv" ? "html" : EXT[format]}`;
-    summary.push({ row: fleetRow(plan), href });
-    if (single && !outIsDir) {
-      const text = render(plan, format);
-      if (outIsFile) await writeAtomic(out!, text);
-      else await writeStdout(text);
-      return;
-    }
+    summary.push({ row: result.row, href });
+    if (result.text === undefined) return;
     if (outIsDir) {
-      if (format === "csv") await writeAtomic(`${out}/${base}.html`, planHtml(plan));
-      else await writeAtomic(`${out}/${href}`, render(plan, format));
-    } else if (format === "json") {
-      await writeStdout(JSON.stringify(plan) + "\n");
-    } else if (format !== "csv") {
-      await writeStdout(render(plan, format) + "\n");
-    }
+      await writeAtomic(format === "csv" ? `${out}/${base}.html` : `${out}/${href}`, result.text);
+    } else await writeStdout(result.text);
   }
 
-  for (const src of sources) {
-    if (src.kind === "csv") {
-      const text = await readSitesCsvText(src.path);
-      for await (const r of streamSitesCsv(text, { file: src.path })) {
-        if ("site" in r) await handle(r.site, `${src.path} row ${r.site.source.row}`);
-        else {
-          await handle(undefined, `${src.path} row ${r.error.row}`, new RowError(r.error.message));
-        }
-        progress(undefined);
-      }
-    } else {
-      try {
-        const site = await readSiteFile(src.path);
-        await handle(site, src.path);
-      } catch (e) {
-        if (!(e instanceof SnellpathError)) throw e;
-        await handle(undefined, src.path, e);
-      }
-      progress(sources.length);
+  if (single && !outIsDir) {
+    // one site: its report as it is (no trailing newline added), no workers
+    const src = sources[0];
+    let site: SiteInput;
+    try {
+      site = await readSiteFile(src.path);
+    } catch (e) {
+      if (!(e instanceof SnellpathError)) throw e;
+      await finish({ label: src.path, error: e }, undefined);
+      return worstCode;
     }
+    let plan;
+    try {
+      plan = planSite(site, { registry: reg, monteCarlo: jobOptions.monteCarlo });
+    } catch (e) {
+      if (!(e instanceof SnellpathError)) throw e;
+      await finish({ label: src.path, site }, {
+        ok: false,
+        message: e.message,
+        exitCode: e.exitCode,
+      });
+      return worstCode;
+    }
+    summary.push({ row: fleetRow(plan), href: "" });
+    const text = render(plan, format);
+    if (outIsFile) await writeAtomic(out!, text);
+    else await writeStdout(text);
+    return worstCode;
+  }
+
+  const pool = jobs > 1 ? new WorkerPool(jobs, jobOptions, finish) : undefined;
+  const submit = async (item: Item) => {
+    if (pool && item.site && !item.error) await pool.submit(item);
+    else if (pool) await pool.submitDone(item);
+    else await finish(item, item.site && !item.error ? planJob(item.site, jobOptions) : undefined);
+  };
+  try {
+    for (const src of sources) {
+      if (src.kind === "csv") {
+        const text = await readSitesCsvText(src.path);
+        for await (const r of streamSitesCsv(text, { file: src.path })) {
+          if ("site" in r) {
+            await submit({ site: r.site, label: `${src.path} row ${r.site.source.row}` });
+          } else {
+            await submit({
+              label: `${src.path} row ${r.error.row}`,
+              error: new RowError(r.error.message),
+            });
+          }
+          progress(undefined);
+        }
+      } else {
+        try {
+          const site = await readSiteFile(src.path);
+          await submit({ site, label: src.path });
+        } catch (e) {
+          if (!(e instanceof SnellpathError)) throw e;
+          await submit({ label: src.path, error: e });
+        }
+        progress(sources.length);
+      }
+    }
+    await pool?.drain();
+  } finally {
+    pool?.close();
   }
 
   if (!single || outIsDir) {
@@ -318,23 +465,6 @@ async function main(): Promise<number> {
     }
   }
   return worstCode;
-}
-
-function render(plan: SitePlan, format: Format): string {
-  switch (format) {
-    case "json":
-      return planJson(plan);
-    case "md":
-      return planMarkdown(plan);
-    case "html":
-      return planHtml(plan);
-    case "csv":
-      return fleetCsv([fleetRow(plan)]);
-    case "card":
-      return formatCard(plan, { format: "html" });
-    default:
-      return planText(plan);
-  }
 }
 
 async function writeStdout(text: string): Promise<void> {

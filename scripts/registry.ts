@@ -14,16 +14,15 @@
 import { z } from "zod";
 import { InputError, NotFoundError } from "../lib/errors.ts";
 import {
-  buildSnapshot,
   createRegistry,
   DATA_DIR,
   type DataDoc,
   defaultRegistry,
-  loadRegistry,
   nearest,
   type Registry,
   SNAPSHOT_FILE,
 } from "../lib/registry/mod.ts";
+import { buildSnapshot, loadRegistry } from "../lib/registry/load.ts";
 import { SCHEMAS } from "../lib/registry/schemas/mod.ts";
 import type { MaterialProperties } from "../lib/registry/q_materials.ts";
 import { parseCli, runMain } from "./_cli.ts";

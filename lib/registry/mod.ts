@@ -10,7 +10,12 @@
  *
  * @module
  */
-import { type LoadedRegistry, loadRegistry } from "./load.ts";
+import {
+  fullValidationLoaded,
+  type LoadedRegistry,
+  loadRegistry,
+  snapshotFresh,
+} from "./load_snapshot.ts";
 import { type CoreQueries, coreQueries } from "./core.ts";
 import { type PipeQueries, pipeQueries } from "./q_pipes.ts";
 import { type MaterialQueries, materialQueries } from "./q_materials.ts";
@@ -21,10 +26,11 @@ export {
   buildSnapshot,
   canonicalJson,
   loadRegistry,
+  loadRegistryAsync,
   MAX_DATA_FILE_BYTES,
   SNAPSHOT_FILE,
-} from "./load.ts";
-export type { DataDoc, LoadedRegistry, LoadOptions } from "./load.ts";
+} from "./load_snapshot.ts";
+export type { DataDoc, LoadedRegistry, LoadOptions } from "./load_snapshot.ts";
 export { nearest } from "./nearest.ts";
 export { checkVerificationTable } from "./verify.ts";
 export type {
@@ -91,6 +97,29 @@ export type Registry =
 export const DATA_DIR: URL = new URL("../../data/", import.meta.url);
 
 let cached: Registry | undefined;
+
+// The full validator (npm yaml and zod, lib/registry/load.ts) is imported only when the bundled
+// snapshot is stale (a YAML file was edited since `deno task registry snapshot`): a normal run
+// uses the snapshot and never loads either. Checked only when reading data/ is already allowed,
+// so that importing this module never prompts; without that permission the first load refuses
+// anyway. For another data folder import load.ts or call loadRegistryAsync.
+if (!fullValidationLoaded() && readAllowed(DATA_DIR)) {
+  let fresh = false;
+  try {
+    fresh = snapshotFresh(DATA_DIR);
+  } catch {
+    // an unreadable data folder: the first load reports it
+  }
+  if (!fresh) await import("./load.ts");
+}
+
+function readAllowed(dir: URL): boolean {
+  try {
+    return Deno.permissions.querySync({ name: "read", path: dir }).state === "granted";
+  } catch {
+    return false;
+  }
+}
 
 /**
  * The bundled registry, loaded from data/ on first use and then frozen.

@@ -11,7 +11,8 @@ import type { Dimension } from "../units.ts";
 import { trace, type TraceEntry } from "../trace.ts";
 import type { LoadedRegistry } from "./load.ts";
 import { nearest } from "./nearest.ts";
-import { type MaterialEntry, speedPerKelvinFactor } from "./schemas/materials.ts";
+import type { MaterialEntry } from "./schemas/materials.ts";
+import { speedPerKelvinFactor } from "./schemas/values.ts";
 
 /** Roles a material plays in a clamp-on path. */
 export type MaterialRole = "wall" | "lining" | "wedge";

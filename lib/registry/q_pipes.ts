@@ -14,7 +14,8 @@ import { InputError, NotFoundError } from "../errors.ts";
 import type { LoadedRegistry } from "./load.ts";
 import { nearest } from "./nearest.ts";
 import type { Basis } from "./schemas/common.ts";
-import { type PipesFile, sizeValue } from "./schemas/pipes.ts";
+import type { PipesFile } from "./schemas/pipes.ts";
+import { sizeValue } from "./schemas/values.ts";
 import type { ToleranceSet } from "./schemas/tolerances.ts";
 
 /** Millimetres to metres by division, so that 114.3 mm prints as 0.1143 m. */

@@ -83,7 +83,7 @@ async function parseAndBuild(
 ): Promise<SiteInput> {
   const fmt = format ?? formatOf(file, text);
   if (fmt !== "yaml" && fmt !== "json") fail(ctx, "format", JSON.stringify(fmt), "yaml or json");
-  const raw = fmt === "json" ? parseJsonText(ctx, text) : parseYamlText(ctx, text);
+  const raw = fmt === "json" ? parseJsonText(ctx, text) : await parseYamlText(ctx, text);
   return await buildSite(raw, { file: file ?? "<text>", format: fmt }, ctx);
 }
 

@@ -28,18 +28,11 @@ import {
   type SiteFluid,
   type SiteInput,
   SiteInputSchema,
-  type SiteInputValidator,
   type SitePipe,
   type SiteRun,
   type SiteTransducer,
   WATER_FORMULATIONS,
 } from "./schema.ts";
-
-/** zod's `safeParse` with its parse context, which the promised validator type leaves out. */
-type SafeParseWithContext = (
-  data: unknown,
-  ctx: { readonly jitless: boolean },
-) => ReturnType<SiteInputValidator["safeParse"]>;
 
 /** Standard atmosphere, Pa: the pressure assumed when a site gives none. */
 export const STANDARD_ATMOSPHERE = 101325;
@@ -696,13 +689,8 @@ export async function buildSite(
   }
   const notes = text(ctx, top, "notes", "", 20000);
   if (notes !== undefined) site.notes = notes;
-  // Guard: the result must satisfy the published schema (a reader bug, not bad input). Checked
-  // without zod's compiled fast path: compiling it costs more than a one-site run's check.
-  const check = (SiteInputSchema.safeParse as SafeParseWithContext).call(
-    SiteInputSchema,
-    site,
-    { jitless: true },
-  );
+  // Guard: the result must satisfy the published check (a reader bug, not bad input).
+  const check = SiteInputSchema.safeParse(site);
   if (!check.success) {
     const issue = check.error.issues[0];
     throw new Error(

@@ -1,11 +1,11 @@
 /**
  * From bytes or text to a raw value: size limit, binary refusal, YAML (core schema, unique
  * keys, string keys, few aliases, no custom or YAML 1.1 tags, one document) and strict JSON.
- * Syntax errors become one line naming the line and column.
+ * Syntax errors become one line naming the line and column. npm `yaml` is imported only when a
+ * YAML text is parsed: JSON sites (and their duplicate-key check) need none of it.
  *
  * @module
  */
-import { parseDocument } from "yaml";
 import { type Ctx, fail, oneLine } from "./read_fields.ts";
 
 /** Most aliases a site file may expand; site files need few, alias bombs need many. */
@@ -77,9 +77,10 @@ function firstSentence(msg: string): string {
  *
  * @param ctx error context
  * @param text the YAML text
- * @returns the data
+ * @returns the data (a promise: the YAML parser is loaded on first use)
  */
-export function parseYamlText(ctx: Ctx, text: string): unknown {
+export async function parseYamlText(ctx: Ctx, text: string): Promise<unknown> {
+  const { parseDocument } = await import("yaml");
   const doc = parseDocument(text, {
     schema: "core",
     uniqueKeys: true,
@@ -149,13 +150,11 @@ export function parseJsonText(ctx: Ctx, text: string): unknown {
       "valid JSON",
     );
   }
-  // JSON.parse keeps the last of repeated keys silently; the YAML parser, which reads JSON,
-  // finds them.
-  const doc = parseDocument(text, { schema: "json", uniqueKeys: true, strict: true });
-  const dup = doc.errors.find((e) => e.code === "DUPLICATE_KEY");
-  if (dup) {
-    const pos = dup.linePos?.[0] ?? lineCol(text, dup.pos[0]);
-    const key = /^"(?:[^"\\]|\\.)*"/.exec(text.slice(dup.pos[0], dup.pos[0] + 80));
+  // JSON.parse keeps the last of repeated keys silently: find them.
+  const dup = repeatedJsonKey(text);
+  if (dup !== undefined) {
+    const pos = lineCol(text, dup);
+    const key = /^"(?:[^"\\]|\\.)*"/.exec(text.slice(dup, dup + 80));
     fail(
       ctx,
       `line ${pos.line}, column ${pos.col}`,
@@ -164,4 +163,61 @@ export function parseJsonText(ctx: Ctx, text: string): unknown {
     );
   }
   return data;
+}
+
+/**
+ * The offset of the first key that repeats an earlier key of the same object (compared after
+ * decoding escapes, as JSON.parse would), in a text that JSON.parse accepted.
+ *
+ * @param text valid JSON text
+ * @returns the offset of the repeated key's opening quote, or undefined
+ *
+ * @example
+ * ```ts
+ * import { repeatedJsonKey } from "./read_text.ts";
+ * const t = '{"a": {"b": 1, "c": [{"b": 2}]}, "\\u0061": 3}';
+ * if (repeatedJsonKey(t) !== t.lastIndexOf('"\\u0061"')) throw new Error("escaped repeat");
+ * if (repeatedJsonKey('{"a": {"a": 1}}') !== undefined) throw new Error("nested is no repeat");
+ * ```
+ */
+export function repeatedJsonKey(text: string): number | undefined {
+  // One frame per open bracket: the keys seen so far (objects only) and a repeated key waiting
+  // for its value to end. A repeat is reported when its value ends, so a repeat inside that value
+  // comes first (the order in which a parser that builds values before keys finds them).
+  const stack: { keys: Set<string> | null; repeat: number | undefined }[] = [];
+  let expectKey = false;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c === 0x22) {
+      const start = i;
+      let escaped = false;
+      for (i++; i < text.length; i++) {
+        const d = text.charCodeAt(i);
+        if (d === 0x5c) {
+          escaped = true;
+          i++;
+        } else if (d === 0x22) break;
+      }
+      if (expectKey) {
+        const raw = text.slice(start, i + 1);
+        const key = escaped ? JSON.parse(raw) as string : raw.slice(1, -1);
+        const top = stack[stack.length - 1];
+        if (top.keys!.has(key)) top.repeat ??= start;
+        top.keys!.add(key);
+        expectKey = false;
+      }
+    } else if (c === 0x7b || c === 0x5b) {
+      stack.push({ keys: c === 0x7b ? new Set() : null, repeat: undefined });
+      expectKey = c === 0x7b;
+    } else if (c === 0x7d || c === 0x5d || c === 0x2c) {
+      const top = stack[stack.length - 1];
+      if (top?.repeat !== undefined) return top.repeat;
+      if (c === 0x2c) expectKey = top?.keys != null;
+      else {
+        stack.pop();
+        expectKey = false;
+      }
+    }
+  }
+  return undefined;
 }

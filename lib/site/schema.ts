@@ -1,5 +1,5 @@
 /**
- * The site file's validated form: {@link SiteInput}, SI numbers only, and its zod schema.
+ * The site file's validated form: {@link SiteInput}, SI numbers only, and its check.
  *
  * The reader (`read.ts`) turns a YAML, JSON or CSV site description written with unit strings
  * into this shape; every later stage (the plan, reconciliation, reports) reads only this shape.
@@ -8,7 +8,6 @@
  *
  * @module
  */
-import { z } from "zod";
 
 /** Formulations of the water properties a site may ask for (see DESIGN.md, `water`). */
 export const WATER_FORMULATIONS = ["iapws95", "if97", "del-grosso-mader", "marczak"] as const;
@@ -201,13 +200,218 @@ export interface SiteInput {
   source: SiteSource;
 }
 
-const finite = z.number().finite();
-const positive = finite.positive();
-const nonNegative = finite.nonnegative();
-const fraction = finite.min(0).max(1);
-const idText = z.string().regex(/^[a-z0-9][a-z0-9.+-]*$/);
+// The check below is hand-written (no zod on the site-read path: importing zod and building its
+// schema cost more than a one-site run's reading). It gives the issues, paths and messages that
+// the equivalent zod v4 strict-object schema gives, in the same order (tests/site/schema_check.test.ts
+// compares the two on many broken sites).
 
-const fitting = z.strictObject({ fitting: idText, orientation: finite.optional() });
+/** A check of one value: pushes its problems (path, message) and returns nothing. */
+type Check = (v: unknown, path: PropertyKey[], out: SiteSchemaIssue[]) => void;
+
+function received(v: unknown): string {
+  if (v === null) return "null";
+  if (Array.isArray(v)) return "array";
+  if (typeof v === "number") {
+    return Number.isNaN(v)
+      ? "NaN"
+      : Number.isFinite(v)
+      ? "number"
+      : v > 0
+      ? "Infinity"
+      : "-Infinity";
+  }
+  if (typeof v === "object") {
+    const c = Object.getPrototypeOf(v)?.constructor?.name;
+    return c && c !== "Object" ? c : "object";
+  }
+  return typeof v;
+}
+
+const bad = (out: SiteSchemaIssue[], path: PropertyKey[], message: string) =>
+  void out.push({ path: [...path], message });
+const expected = (out: SiteSchemaIssue[], path: PropertyKey[], what: string, v: unknown) =>
+  bad(out, path, `Invalid input: expected ${what}, received ${received(v)}`);
+
+interface NumberRule {
+  int?: boolean;
+  gt?: number;
+  ge?: number;
+  lt?: number;
+  le?: number;
+}
+
+function num(rule: NumberRule = {}): Check {
+  return (v, path, out) => {
+    if (typeof v !== "number" || !Number.isFinite(v)) return expected(out, path, "number", v);
+    if (rule.int) {
+      if (!Number.isInteger(v)) return expected(out, path, "int", v);
+      if (v > Number.MAX_SAFE_INTEGER) {
+        bad(out, path, `Too big: expected int to be <=${Number.MAX_SAFE_INTEGER}`);
+      } else if (v < -Number.MAX_SAFE_INTEGER) {
+        bad(out, path, `Too small: expected int to be >=${-Number.MAX_SAFE_INTEGER}`);
+      }
+    }
+    const what = "number";
+    if (rule.gt !== undefined && !(v > rule.gt)) {
+      bad(out, path, `Too small: expected ${what} to be >${rule.gt}`);
+    }
+    if (rule.ge !== undefined && !(v >= rule.ge)) {
+      bad(out, path, `Too small: expected ${what} to be >=${rule.ge}`);
+    }
+    if (rule.lt !== undefined && !(v < rule.lt)) {
+      bad(out, path, `Too big: expected ${what} to be <${rule.lt}`);
+    }
+    if (rule.le !== undefined && !(v <= rule.le)) {
+      bad(out, path, `Too big: expected ${what} to be <=${rule.le}`);
+    }
+  };
+}
+
+function str(min = 0, pattern?: RegExp): Check {
+  return (v, path, out) => {
+    if (typeof v !== "string") return expected(out, path, "string", v);
+    if (v.length < min) bad(out, path, `Too small: expected string to have >=${min} characters`);
+    if (pattern && !pattern.test(v)) {
+      bad(out, path, `Invalid string: must match pattern ${pattern}`);
+    }
+  };
+}
+
+const bool: Check = (v, path, out) => {
+  if (typeof v !== "boolean") expected(out, path, "boolean", v);
+};
+
+function oneOf(options: readonly string[]): Check {
+  return (v, path, out) => {
+    if (typeof v !== "string" || !options.includes(v)) {
+      bad(out, path, `Invalid option: expected one of ${options.map((o) => `"${o}"`).join("|")}`);
+    }
+  };
+}
+
+/** Marks a key that may be absent (or undefined). */
+const OPTIONAL = Symbol("optional");
+/** Marks a key that must be there, whatever its value (undefined included). */
+const KEY = Symbol("key");
+type Field = Check & { [OPTIONAL]?: true; [KEY]?: true };
+
+const present: Field = Object.assign((() => {}) as Check, { [KEY]: true as const });
+function opt(c: Check): Field {
+  const f: Field = (v, path, out) => {
+    if (v !== undefined) c(v, path, out);
+  };
+  f[OPTIONAL] = true;
+  return f;
+}
+
+function strict(shape: Record<string, Field>): Check {
+  const keys = Object.keys(shape);
+  return (v, path, out) => {
+    if (v === null || typeof v !== "object" || Array.isArray(v)) {
+      return expected(out, path, "object", v);
+    }
+    const o = v as Record<string, unknown>;
+    for (const k of keys) {
+      path.push(k);
+      if (shape[k][KEY] && !Object.hasOwn(o, k)) expected(out, path, "nonoptional", undefined);
+      else shape[k](o[k], path, out);
+      path.pop();
+    }
+    const extra = Object.keys(o).filter((k) => !Object.hasOwn(shape, k));
+    if (extra.length) {
+      const list = extra.map((k) => `"${k}"`).join(", ");
+      bad(out, path, `Unrecognized key${extra.length > 1 ? "s" : ""}: ${list}`);
+    }
+  };
+}
+
+function list(item: Check, min = 0): Check {
+  return (v, path, out) => {
+    if (!Array.isArray(v)) return expected(out, path, "array", v);
+    for (let i = 0; i < v.length; i++) {
+      path.push(i);
+      item(v[i], path, out);
+      path.pop();
+    }
+    if (v.length < min) bad(out, path, `Too small: expected array to have >=${min} items`);
+  };
+}
+
+const finite = num();
+const positive = num({ gt: 0 });
+const nonNegative = num({ ge: 0 });
+const fraction = num({ ge: 0, le: 1 });
+const idText = str(0, /^[a-z0-9][a-z0-9.+-]*$/);
+const text1 = str(1);
+
+const fitting = strict({ fitting: idText, orientation: opt(finite) });
+
+const siteCheck = strict({
+  name: text1,
+  id: opt(text1),
+  invented: opt(bool),
+  pipe: strict({
+    geometry: oneOf(["catalogue", "measured"]),
+    standard: opt(text1),
+    nps: opt(text1),
+    schedule: opt(text1),
+    outsideDiameter: opt(positive),
+    circumference: opt(positive),
+    wallThickness: opt(positive),
+    material: opt(idText),
+    wallSoundSpeed: opt(positive),
+    wallShearSpeed: opt(positive),
+    measuredWallThickness: opt(positive),
+    roughness: opt(nonNegative),
+    lining: opt(strict({ material: idText, thickness: positive, soundSpeed: opt(positive) })),
+  }),
+  fluid: strict({
+    liquid: idText,
+    temperature: positive,
+    pressure: positive,
+    salinity: opt(nonNegative),
+    temperatureRange: opt(strict({ min: positive, max: positive })),
+    soundSpeed: opt(positive),
+    density: opt(positive),
+    kinematicViscosity: opt(positive),
+    formulation: opt(idText),
+  }),
+  flow: strict({
+    quantity: oneOf(["flowRate", "velocity"]),
+    minimum: positive,
+    design: opt(positive),
+    maximum: positive,
+  }),
+  transducer: strict({
+    wedgeMaterial: opt(idText),
+    wedgeSoundSpeed: opt(positive),
+    wedgeAngle: positive,
+    frequency: positive,
+    timingResolution: opt(positive),
+    zeroOffset: opt(finite),
+    fixedDelay: opt(nonNegative),
+    wedgeTemperatureCoefficient: opt(finite),
+    wedgeReferenceTemperature: opt(positive),
+    elementHeight: opt(positive),
+    indexOffset: opt(finite),
+  }),
+  mountings: list(num({ int: true, ge: 1, le: MAX_TRAVERSES }), 1),
+  run: opt(strict({
+    length: positive,
+    upstream: fitting,
+    downstream: opt(fitting),
+    plannedPosition: opt(nonNegative),
+  })),
+  targetUncertainty: opt(num({ gt: 0, lt: 1 })),
+  content: opt(strict({ solids: opt(fraction), gas: opt(fraction) })),
+  notes: opt(str()),
+  defaults: list(strict({ field: str(), value: present, message: str() })),
+  source: strict({
+    file: str(),
+    format: oneOf(["yaml", "json", "csv"]),
+    row: opt(num({ int: true, gt: 0 })),
+  }),
+});
 
 /** One problem found by {@link SiteInputSchema}. */
 export interface SiteSchemaIssue {
@@ -217,9 +421,9 @@ export interface SiteSchemaIssue {
   readonly message: string;
 }
 
-/** The part of a zod schema that {@link SiteInputSchema} promises: `parse` and `safeParse`. */
+/** What {@link SiteInputSchema} offers: `parse` and `safeParse`, as a zod schema would. */
 export interface SiteInputValidator {
-  /** Return the data typed as a site, or throw zod's error. */
+  /** Return the data typed as a site, or throw an error naming the first problem. */
   parse(data: unknown): SiteInput;
   /** Check the data without throwing. */
   safeParse(
@@ -230,89 +434,36 @@ export interface SiteInputValidator {
 }
 
 /**
- * The zod schema of {@link SiteInput} (a zod v4 strict object; typed here by the part of its
- * interface we promise): every site the reader returns satisfies it.
+ * The check of {@link SiteInput}: every site the reader returns satisfies it. Strict objects
+ * (unknown keys refused), SI numbers finite and within their sign ranges, ids in lower case,
+ * mountings integers 1 to {@link MAX_TRAVERSES}. Issues come in key order, each object's
+ * unknown keys after its known ones, with the paths and messages of the equivalent zod v4
+ * strict-object schema.
  *
  * @example
  * ```ts
  * import { SiteInputSchema } from "./schema.ts";
- * if (SiteInputSchema.safeParse({ name: "x" }).success) throw new Error("incomplete site");
+ * const r = SiteInputSchema.safeParse({ name: "x" });
+ * if (r.success || r.error.issues[0].path.join(".") !== "pipe") throw new Error("incomplete site");
  * ```
  */
-export const SiteInputSchema: SiteInputValidator = z.strictObject({
-  name: z.string().min(1),
-  id: z.string().min(1).optional(),
-  invented: z.boolean().optional(),
-  pipe: z.strictObject({
-    geometry: z.enum(["catalogue", "measured"]),
-    standard: z.string().min(1).optional(),
-    nps: z.string().min(1).optional(),
-    schedule: z.string().min(1).optional(),
-    outsideDiameter: positive.optional(),
-    circumference: positive.optional(),
-    wallThickness: positive.optional(),
-    material: idText.optional(),
-    wallSoundSpeed: positive.optional(),
-    wallShearSpeed: positive.optional(),
-    measuredWallThickness: positive.optional(),
-    roughness: nonNegative.optional(),
-    lining: z.strictObject({
-      material: idText,
-      thickness: positive,
-      soundSpeed: positive.optional(),
-    }).optional(),
-  }),
-  fluid: z.strictObject({
-    liquid: idText,
-    temperature: positive,
-    pressure: positive,
-    salinity: nonNegative.optional(),
-    temperatureRange: z.strictObject({ min: positive, max: positive }).optional(),
-    soundSpeed: positive.optional(),
-    density: positive.optional(),
-    kinematicViscosity: positive.optional(),
-    formulation: idText.optional(),
-  }),
-  flow: z.strictObject({
-    quantity: z.enum(["flowRate", "velocity"]),
-    minimum: positive,
-    design: positive.optional(),
-    maximum: positive,
-  }),
-  transducer: z.strictObject({
-    wedgeMaterial: idText.optional(),
-    wedgeSoundSpeed: positive.optional(),
-    wedgeAngle: positive,
-    frequency: positive,
-    timingResolution: positive.optional(),
-    zeroOffset: finite.optional(),
-    fixedDelay: nonNegative.optional(),
-    wedgeTemperatureCoefficient: finite.optional(),
-    wedgeReferenceTemperature: positive.optional(),
-    elementHeight: positive.optional(),
-    indexOffset: finite.optional(),
-  }),
-  mountings: z.array(z.number().int().min(1).max(MAX_TRAVERSES)).min(1),
-  run: z.strictObject({
-    length: positive,
-    upstream: fitting,
-    downstream: fitting.optional(),
-    plannedPosition: nonNegative.optional(),
-  }).optional(),
-  targetUncertainty: finite.gt(0).lt(1).optional(),
-  content: z.strictObject({ solids: fraction.optional(), gas: fraction.optional() }).optional(),
-  notes: z.string().optional(),
-  defaults: z.array(z.strictObject({
-    field: z.string(),
-    value: z.unknown(),
-    message: z.string(),
-  })),
-  source: z.strictObject({
-    file: z.string(),
-    format: z.enum(["yaml", "json", "csv"]),
-    row: z.number().int().positive().optional(),
-  }),
-});
+export const SiteInputSchema: SiteInputValidator = {
+  safeParse(data: unknown) {
+    const issues: SiteSchemaIssue[] = [];
+    siteCheck(data, [], issues);
+    return issues.length
+      ? { success: false, error: { issues } }
+      : { success: true, data: data as SiteInput };
+  },
+  parse(data: unknown): SiteInput {
+    const r = SiteInputSchema.safeParse(data);
+    if (!r.success) {
+      const i = r.error.issues[0];
+      throw new TypeError(`invalid site at ${i.path.join(".") || "(root)"}: ${i.message}`);
+    }
+    return r.data;
+  },
+};
 
 /**
  * The keys a site file may hold, per object path (`""` is the top level). The reader refuses

@@ -11,7 +11,8 @@
  */
 import { assert, closeRel } from "../_assert.ts";
 import { debianVersion, hasPython, runPython } from "../_python.ts";
-import { createRegistry, loadRegistry } from "../../lib/registry/mod.ts";
+import { createRegistry } from "../../lib/registry/mod.ts";
+import { loadRegistry } from "../../lib/registry/load.ts";
 import type { MaterialEntry } from "../../lib/registry/schemas/materials.ts";
 
 const loaded = loadRegistry(new URL("../../data/", import.meta.url));

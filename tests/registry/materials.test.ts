@@ -5,7 +5,8 @@
  */
 import { assert, closeRel } from "../_assert.ts";
 import { InputError, NotFoundError, OutOfRangeError, type Warning } from "../../lib/errors.ts";
-import { createRegistry, loadRegistry } from "../../lib/registry/mod.ts";
+import { createRegistry } from "../../lib/registry/mod.ts";
+import { loadRegistry } from "../../lib/registry/load.ts";
 import { removeTemp, tempData } from "./_tempdata.ts";
 
 const bundled = createRegistry(loadRegistry(new URL("../../data/", import.meta.url)));

@@ -9,6 +9,9 @@
  * @module
  */
 import { z } from "zod";
+import { speedPerKelvinFactor } from "./values.ts";
+
+export { speedPerKelvinFactor };
 import { parseQuantity } from "../../units.ts";
 import type { Dimension } from "../../units.ts";
 import { BasisSchema, EntryId, range, SourceId } from "./common.ts";
@@ -54,32 +57,6 @@ export function strictQuantity(dimension: Dimension, positive = false) {
       });
     }
   });
-}
-
-/**
- * Split a rate-of-change unit `<speed unit>/<temperature unit>` (`m/s/K`, `m/s/degC`,
- * `ft/s/degF`) into the SI factor that turns it into m/s per kelvin.
- *
- * @param unit the unit string
- * @returns factor to (m/s)/K, or undefined when not such a unit
- *
- * @example
- * ```ts
- * import { speedPerKelvinFactor } from "./materials.ts";
- * if (speedPerKelvinFactor("m/s/K") !== 1) throw new Error("m/s/K");
- * if (Math.abs(speedPerKelvinFactor("ft/s/degF")! - 0.3048 * 1.8) > 1e-15) throw new Error();
- * ```
- */
-export function speedPerKelvinFactor(unit: string): number | undefined {
-  const m = /^(.+)\/\s*(K|degC|degF)$/.exec(unit.trim());
-  if (!m) return undefined;
-  let speed: number;
-  try {
-    speed = parseQuantity(`1 ${m[1]}`, "speed", "unit");
-  } catch {
-    return undefined;
-  }
-  return m[2] === "degF" ? speed * 9 / 5 : speed;
 }
 
 /** A temperature coefficient of sound speed, such as `{ value: -2.5, unit: "m/s/K" }`. */

@@ -9,6 +9,9 @@
  * @module
  */
 import { z } from "zod";
+import { sizeValue } from "./values.ts";
+
+export { sizeValue };
 import { BasisSchema, EntryId, SourceId } from "./common.ts";
 
 /** A size as the trade writes it: "1/8", "1-1/2", "4", "13.5". */
@@ -66,15 +69,6 @@ export const WallProvenance = z.strictObject({
   basis: BasisSchema,
   note: z.string().optional(),
 });
-
-/** Parse a size label to inches (nominal). */
-export function sizeValue(label: string): number {
-  const m = /^(\d+)-(\d+)\/(\d+)$/.exec(label);
-  if (m) return Number(m[1]) + Number(m[2]) / Number(m[3]);
-  const f = /^(\d+)\/(\d+)$/.exec(label);
-  if (f) return Number(f[1]) / Number(f[2]);
-  return Number(label);
-}
 
 /** The pipes data file: one standard. */
 export const PipesFile = z.strictObject({

@@ -1,0 +1,367 @@
+/**
+ * The registry loader's quick path: list and hash the YAML files under data/, and when the
+ * validated snapshot (`data/snapshot.json`) was built from exactly those bytes, use its documents
+ * (no YAML parsing, no zod). Full validation lives in `load.ts`, which registers itself here when
+ * imported; `lib/registry/mod.ts` imports it on start only when the bundled snapshot is stale, so
+ * a normal run never loads `yaml` or zod.
+ *
+ * This module, `load.ts` and `site` are the only places in lib/ that read files.
+ *
+ * @module
+ */
+import { RegistryError } from "../errors.ts";
+import type { SourceEntry as Source } from "./schemas/sources.ts";
+import { sha256OfText } from "./sha256.ts";
+
+/** One validated data file. */
+export interface DataDoc {
+  /** Path relative to the data folder, with forward slashes. */
+  readonly file: string;
+  /** The file's kind. */
+  readonly kind: string;
+  /** The validated, frozen content. */
+  // deno-lint-ignore no-explicit-any
+  readonly data: any;
+}
+
+/** Everything the loader read, validated and frozen. */
+export interface LoadedRegistry {
+  /** Data folder it was read from. */
+  readonly dir: string;
+  /** Every data file, sorted by path. */
+  readonly docs: readonly DataDoc[];
+  /** The bibliography by id. */
+  readonly sources: ReadonlyMap<string, Source>;
+  /** SHA-256 (hex) of the canonical serialisation of every data file. */
+  readonly hash: string;
+  /** Whether the validated snapshot was used (the YAML bytes matched it). */
+  readonly fromSnapshot: boolean;
+}
+
+/** Options of {@link loadRegistry}. */
+export interface LoadOptions {
+  /**
+   * Use the validated snapshot (`data/snapshot.json`) when it was built from exactly these
+   * YAML files (same bytes: SHA-256 over names and contents). Default true. A stale or absent
+   * snapshot falls back to full validation.
+   */
+  readonly snapshot?: boolean;
+}
+
+/** Largest data file the loader reads, in bytes. */
+export const MAX_DATA_FILE_BYTES = 4 * 1024 * 1024;
+
+/** Name of the validated snapshot inside the data folder (built by `deno task registry snapshot`). */
+export const SNAPSHOT_FILE = "snapshot.json";
+/** Version of the snapshot's layout. */
+export const SNAPSHOT_VERSION = 1;
+
+function listYaml(dir: URL, rel = ""): string[] {
+  const out: string[] = [];
+  for (const e of Deno.readDirSync(new URL(rel, dir))) {
+    const path = rel + e.name;
+    if (e.isDirectory) {
+      if (rel === "" && e.name === "demo") continue;
+      out.push(...listYaml(dir, path + "/"));
+    } else if (e.isFile && /\.ya?ml$/.test(e.name)) {
+      out.push(path);
+    }
+  }
+  return out.sort();
+}
+
+/**
+ * A data folder as a file URL ending in a slash.
+ *
+ * @param dir path (relative to the working folder) or file URL
+ * @returns the folder URL
+ */
+export function toDirUrl(dir: string | URL): URL {
+  if (dir instanceof URL) return dir.href.endsWith("/") ? dir : new URL(dir.href + "/");
+  const abs = dir.startsWith("/") ? dir : `${Deno.cwd()}/${dir}`;
+  return new URL(`file://${abs.endsWith("/") ? abs : abs + "/"}`);
+}
+
+/**
+ * Canonical JSON: keys sorted at every level, no whitespace.
+ *
+ * @param value plain data
+ * @returns the text
+ *
+ * @example
+ * ```ts
+ * import { canonicalJson } from "./load_snapshot.ts";
+ * if (canonicalJson({ b: 1, a: [2, { d: 3, c: 4 }] }) !== '{"a":[2,{"c":4,"d":3}],"b":1}') {
+ *   throw new Error("order");
+ * }
+ * ```
+ */
+export function canonicalJson(value: unknown): string {
+  // Built by appending to one string (no intermediate arrays): the registry is hashed this way on
+  // every load. Array holes and undefined elements give nothing, as Array#join would.
+  if (value === null || typeof value !== "object") return JSON.stringify(value);
+  if (Array.isArray(value)) {
+    let s = "[";
+    for (let i = 0; i < value.length; i++) {
+      if (i > 0) s += ",";
+      if (i in value) {
+        const c = canonicalJson(value[i]);
+        if (c !== undefined) s += c;
+      }
+    }
+    return s + "]";
+  }
+  const o = value as Record<string, unknown>;
+  const keys = Object.keys(o).sort();
+  let s = "{";
+  for (let i = 0; i < keys.length; i++) {
+    if (i > 0) s += ",";
+    s += JSON.stringify(keys[i]) + ":" + canonicalJson(o[keys[i]]);
+  }
+  return s + "}";
+}
+
+function deepFreeze<T>(v: T): T {
+  if (v !== null && typeof v === "object" && !Object.isFrozen(v)) {
+    Object.freeze(v);
+    for (const k of Object.keys(v as object)) deepFreeze((v as Record<string, unknown>)[k]);
+  }
+  return v;
+}
+
+/** The YAML files of a data folder, their texts and the SHA-256 over names and bytes. */
+export interface DataSources {
+  /** Paths relative to the folder, sorted. */
+  readonly files: string[];
+  /** Their texts, in the same order. */
+  readonly texts: string[];
+  /** SHA-256 (hex) over `name \0 text \0` of every file in order. */
+  readonly rawHash: string;
+}
+
+/**
+ * Read the YAML files of a data folder (not demo/) and hash them.
+ *
+ * @param dir the data folder URL
+ * @returns files, texts and their hash
+ * @throws {RegistryError} for a file larger than {@link MAX_DATA_FILE_BYTES}
+ */
+export function readSources(dir: URL): DataSources {
+  const files = listYaml(dir);
+  const texts: string[] = [];
+  const parts: string[] = [];
+  for (const file of files) {
+    const url = new URL(file, dir);
+    const size = Deno.statSync(url).size;
+    if (size > MAX_DATA_FILE_BYTES) {
+      throw new RegistryError(file, "(file)", "(root)", `larger than ${MAX_DATA_FILE_BYTES} bytes`);
+    }
+    const text = Deno.readTextFileSync(url);
+    texts.push(text);
+    parts.push(file, "\0", text, "\0");
+  }
+  return { files, texts, rawHash: sha256OfText(parts) };
+}
+
+// deno-lint-ignore no-explicit-any
+function readSnapshot(dir: URL, rawHash: string): any | undefined {
+  let text: string;
+  try {
+    text = Deno.readTextFileSync(new URL(SNAPSHOT_FILE, dir));
+  } catch {
+    return undefined;
+  }
+  try {
+    const snap = JSON.parse(text);
+    if (
+      snap?.version === SNAPSHOT_VERSION && snap.rawHash === rawHash && Array.isArray(snap.docs)
+    ) {
+      return snap;
+    }
+  } catch {
+    // a broken snapshot is ignored: full validation follows
+  }
+  return undefined;
+}
+
+/**
+ * The bibliography of validated documents, by id.
+ *
+ * @param docs the documents
+ * @returns sources by id
+ * @throws {RegistryError} for a repeated source id or no bibliography
+ */
+export function collectSources(docs: readonly DataDoc[]): Map<string, Source> {
+  const sources = new Map<string, Source>();
+  for (const d of docs.filter((d) => d.kind === "sources")) {
+    for (const [i, s] of (d.data.sources as Source[]).entries()) {
+      if (sources.has(s.id)) {
+        throw new RegistryError(d.file, s.id, `sources[${i}].id`, `duplicate source id '${s.id}'`);
+      }
+      sources.set(s.id, s);
+    }
+  }
+  if (sources.size === 0) {
+    throw new RegistryError("sources.yaml", "(file)", "(root)", "no bibliography found");
+  }
+  return sources;
+}
+
+/**
+ * The content hash: SHA-256 over the canonical JSON of `[file, content]` pairs in path order.
+ *
+ * @param docs the documents
+ * @returns the hash, hex
+ */
+export function contentHash(docs: readonly DataDoc[]): string {
+  return sha256OfText([canonicalJson(docs.map((d) => [d.file, d.data]))]);
+}
+
+/** Full validation of YAML texts (registered by `load.ts`). */
+export type FullValidation = (files: string[], texts: string[]) => DataDoc[];
+
+let fullValidation: FullValidation | undefined;
+
+/**
+ * Register the full validator (called by `load.ts` when it is evaluated).
+ *
+ * @param fn the validator
+ */
+export function registerFullValidation(fn: FullValidation): void {
+  fullValidation = fn;
+}
+
+/**
+ * Whether the full validator (yaml and zod, `load.ts`) is loaded.
+ *
+ * @returns true once `load.ts` was imported
+ */
+export function fullValidationLoaded(): boolean {
+  return fullValidation !== undefined;
+}
+
+function needFull(): FullValidation {
+  if (fullValidation) return fullValidation;
+  throw new RegistryError(
+    SNAPSHOT_FILE,
+    "(file)",
+    "(root)",
+    "stale or absent, and the full validator is not loaded: import lib/registry/load.ts, or " +
+      "call loadRegistryAsync",
+  );
+}
+
+/**
+ * Whether a data folder's snapshot was built from exactly its YAML bytes (the quick path).
+ *
+ * @param dir the data folder (path or file URL)
+ * @returns true when {@link loadRegistry} would use the snapshot
+ */
+export function snapshotFresh(dir: string | URL): boolean {
+  const base = toDirUrl(dir);
+  const read = readSources(base);
+  primed = { href: base.href, read };
+  return readSnapshot(base, read.rawHash) !== undefined;
+}
+
+/** What {@link snapshotFresh} read, kept for the next load of the same folder (used once). */
+let primed: { href: string; read: DataSources } | undefined;
+
+function sourcesOf(base: URL): DataSources {
+  const p = primed;
+  primed = undefined;
+  return p?.href === base.href ? p.read : readSources(base);
+}
+
+/**
+ * Load, validate, freeze and hash the reference data in a folder.
+ *
+ * Reads every `*.yaml` below `dir` except `demo/`. Each file names its `kind`, one of the
+ * schemas in `schemas/mod.ts`. Refuses, with a {@link RegistryError} naming the file, the
+ * entry and the field: YAML syntax errors, an unknown kind, a schema violation (bad unit,
+ * impossible row), a number without source and basis, an unknown source id, a duplicate id.
+ *
+ * Full validation (YAML parsing and zod) takes long on a slow machine, so a validated
+ * snapshot (`snapshot.json`, built by `deno task registry snapshot`) is used when its
+ * recorded SHA-256 of the YAML bytes matches the files on disk; any edit to a YAML file makes
+ * it stale and the loader validates in full (the validator in `load.ts`, which
+ * `lib/registry/mod.ts` imports on start when the bundled snapshot is stale; for another folder
+ * import `load.ts` or use {@link loadRegistryAsync}). The content hash is recomputed from the
+ * documents either way.
+ *
+ * The hash is SHA-256 (FIPS 180-4) over the canonical JSON (sorted keys) of `[file, content]`
+ * pairs in path order: it is the same on every machine for the same data.
+ *
+ * @param dir the data folder (path or file URL)
+ * @param options snapshot use
+ * @returns the validated registry data
+ *
+ * @example
+ * ```ts
+ * import { loadRegistry } from "./load.ts";
+ * const reg = loadRegistry(new URL("../../data/", import.meta.url));
+ * if (!/^[0-9a-f]{64}$/.test(reg.hash)) throw new Error("hash");
+ * ```
+ */
+export function loadRegistry(dir: string | URL, options?: LoadOptions): LoadedRegistry {
+  const base = toDirUrl(dir);
+  const { files, texts, rawHash } = sourcesOf(base);
+  const snap = options?.snapshot === false ? undefined : readSnapshot(base, rawHash);
+  const docs: DataDoc[] = snap ? snap.docs : needFull()(files, texts);
+  const sources = collectSources(docs);
+  const hash = contentHash(docs);
+  for (const d of docs) deepFreeze(d.data);
+  return Object.freeze({
+    dir: base.href,
+    docs: Object.freeze(docs),
+    sources,
+    hash,
+    fromSnapshot: snap !== undefined,
+  });
+}
+
+/**
+ * {@link loadRegistry}, first importing the full validator if it is not loaded yet (so that a
+ * stale or absent snapshot is validated in full instead of refused).
+ *
+ * @param dir the data folder (path or file URL)
+ * @param options snapshot use
+ * @returns the validated registry data
+ *
+ * @example
+ * ```ts
+ * import { loadRegistryAsync } from "./load_snapshot.ts";
+ * const reg = await loadRegistryAsync(new URL("../../data/", import.meta.url), { snapshot: false });
+ * if (reg.fromSnapshot) throw new Error("validated in full");
+ * ```
+ */
+export async function loadRegistryAsync(
+  dir: string | URL,
+  options?: LoadOptions,
+): Promise<LoadedRegistry> {
+  if (!fullValidation) await import("./load.ts");
+  return loadRegistry(dir, options);
+}
+
+/**
+ * Build the validated snapshot of a data folder: full validation, then the validated
+ * documents as JSON with the SHA-256 of the YAML bytes they came from and the content hash.
+ * Needs the full validator (import `load.ts`).
+ *
+ * @param dir the data folder
+ * @returns the snapshot's JSON text
+ *
+ * @example
+ * ```ts
+ * import { buildSnapshot } from "./load.ts";
+ * const snap = JSON.parse(buildSnapshot(new URL("../../data/", import.meta.url)));
+ * if (snap.hash.length !== 64) throw new Error();
+ * ```
+ */
+export function buildSnapshot(dir: string | URL): string {
+  const base = toDirUrl(dir);
+  const { files, texts, rawHash } = readSources(base);
+  const docs = needFull()(files, texts);
+  return JSON.stringify({ version: SNAPSHOT_VERSION, rawHash, hash: contentHash(docs), docs }) +
+    "\n";
+}
