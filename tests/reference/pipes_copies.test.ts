@@ -230,3 +230,29 @@ Deno.test("F441 schedule 80 wall plus side: 12 % of minimum wall per copy-f441-w
     assert.equal(rule.wall.minusFraction, 0, "tabulated wall is the minimum");
   }
 });
+
+// --- ASME B36.10M, large sizes ------------------------------------------------------------------
+
+Deno.test("B36.10M NPS 26-36 walls match copy-b36-hi-edb (HI data book steel table)", () => {
+  // [NPS, schedule, nominal wall in] as printed in the copy.
+  const copy: [string, string, number][] = [
+    ["26", "10", 0.312],
+    ["26", "STD", 0.375],
+    ["26", "20", 0.5],
+    ["28", "30", 0.625],
+    ["30", "10", 0.312],
+    ["30", "30", 0.625],
+    ["32", "40", 0.688],
+    ["34", "40", 0.688],
+    ["36", "30", 0.625],
+    ["36", "40", 0.75],
+    ["36", "XS", 0.5],
+  ];
+  for (const [nps, sch, wall] of copy) {
+    const p = registry.pipe({ standard: "B36.10M", nps, schedule: sch });
+    closeAbs(p.wallThickness, wall * IN, 0.006 * MM, `NPS ${nps} Sch ${sch}`);
+  }
+  // The one row the copy lacks is the one still marked recalled.
+  const p = registry.pipe({ standard: "B36.10M", nps: "30", schedule: "40" });
+  assert.equal(p.provenance.wallThickness.basis, "recalled");
+});
