@@ -169,11 +169,13 @@ Deno.test("recalled data say so, with a spread", () => {
   const p = registry.pipe({ standard: "B36.10M", nps: 30, schedule: 40 as unknown as string });
   assert.equal(p.basis, "recalled");
   assert.ok((p.provenance.wallThickness.spread ?? 0) > 0);
+  // Ductile iron: walls transcribed from public copies, the C104 lining still recalled.
   const di = registry.pipe({ standard: "AWWA C151", nps: 8, schedule: "PC 350" });
-  assert.equal(di.basis, "recalled");
+  assert.equal(di.basis, "transcribed");
+  assert.ok(di.copy?.includes("copy-c151-pc-table"));
   assert.equal(di.lining?.material, "cement-mortar");
   assert.equal(di.lining?.basis, "recalled");
-  assert.equal(di.copy, undefined);
+  assert.ok((di.lining?.spread ?? 0) > 0, "recalled lining keeps its spread");
 });
 
 Deno.test("tolerance sets resolve by id, standard and material", () => {
