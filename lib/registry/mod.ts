@@ -26,8 +26,9 @@ export {
 } from "./load.ts";
 export type { DataDoc, LoadedRegistry, LoadOptions } from "./load.ts";
 export { nearest } from "./nearest.ts";
-export { checkVerificationTable } from "./verify.ts";
+export { checkVerificationTable, recalledRows } from "./verify.ts";
 export type {
+  RecalledRow,
   RowEvaluator,
   ToTableUnit,
   VerificationCheck,
