@@ -5,7 +5,7 @@
  *
  * @module
  */
-import { defaultRegistry } from "../lib/registry/mod.ts";
+import { defaultRegistry, type RecalledRow, recalledRows } from "../lib/registry/mod.ts";
 import { verifyWaterTable, WATER_VERIFICATION_TABLES } from "../lib/water/mod.ts";
 import { SEAWATER_VERIFICATION_FORMULATIONS, verifySeawaterTable } from "../lib/liquids/mod.ts";
 import { parseCli, runMain } from "./_cli.ts";
@@ -24,6 +24,9 @@ Options:
   --json         machine-readable output (every check)
   --debug        stack trace on errors
   -h, --help     this help
+
+Registry section: every datum still marked basis recalled, with its file, entry, source and the
+recorded reason (a row without one says so). It lists; it never fails the run.
 
 Installation section: the distorted-profile model against each published point on readings
 behind a single bend (data/installation/), pass when inside the published bounds or outside by
@@ -100,9 +103,15 @@ runMain(() => {
   // --- installation section: the distorted-profile model against published data ----------
   const inst: InstallationCheck[] = wanted?.length ? [] : checkInstallationData();
   const instFailed = inst.filter((c) => !c.ok).length;
+  // --- registry section: rows still resting on memory, with their recorded reasons --------
+  const recalled: RecalledRow[] = wanted?.length ? [] : recalledRows(reg.loaded.docs);
   if (values.json) {
     console.log(
-      JSON.stringify({ registryHash: reg.hash, tables: results, installation: inst }, null, 2),
+      JSON.stringify(
+        { registryHash: reg.hash, tables: results, installation: inst, recalled },
+        null,
+        2,
+      ),
     );
   } else {
     console.log(`registry ${reg.hash.slice(0, 16)}…: ${results.length} verification tables`);
@@ -137,6 +146,7 @@ runMain(() => {
         (notRun ? ` (${notRun} tables not run)` : ""),
     );
     if (inst.length) printInstallation(inst, values["all-rows"] === true);
+    if (!wanted?.length) printRecalled(recalled);
   }
   return failed > 0 || instFailed > 0 || (values.strict && notRun > 0) ? 1 : 0;
 });
@@ -174,4 +184,24 @@ function printInstallation(checks: InstallationCheck[], all: boolean): void {
   }
   const nBad = checks.filter((c) => !c.ok).length;
   console.log(`\n${checks.length - nBad} passed, ${nBad} failed (installation)`);
+}
+
+/** Registry section: per file, each recalled row and its reason, cut to 100 columns. */
+function printRecalled(rows: RecalledRow[]): void {
+  const fit = (t: string) => (t.length > 100 ? t.slice(0, 99) + "…" : t);
+  const files = new Map<string, RecalledRow[]>();
+  for (const r of rows) files.set(r.file, [...(files.get(r.file) ?? []), r]);
+  const none = rows.filter((r) => !r.reason).length;
+  console.log(
+    `\nregistry: ${rows.length} rows still basis recalled in ${files.size} files` +
+      ` (${none} without a recorded reason)`,
+  );
+  for (const [file, g] of files) {
+    console.log(`\n${file}: ${g.length}`);
+    for (const r of g) {
+      const where = r.path.startsWith(r.entry) || !r.entry ? r.path : `${r.entry} ${r.path}`;
+      console.log(fit(`        ${where} [${r.source}]`));
+      console.log(fit(`          ${r.reason || "(no reason recorded)"}`));
+    }
+  }
 }

@@ -32,8 +32,9 @@ export {
 } from "./load_snapshot.ts";
 export type { DataDoc, LoadedRegistry, LoadOptions } from "./load_snapshot.ts";
 export { nearest } from "./nearest.ts";
-export { checkVerificationTable } from "./verify.ts";
+export { checkVerificationTable, recalledRows } from "./verify.ts";
 export type {
+  RecalledRow,
   RowEvaluator,
   ToTableUnit,
   VerificationCheck,

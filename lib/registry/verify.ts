@@ -109,3 +109,81 @@ export function checkVerificationTable(
   });
   return checks;
 }
+
+/** One datum (or enclosing entry) of the registry that still rests on memory. */
+export interface RecalledRow {
+  /** Data file, relative to the data folder. */
+  readonly file: string;
+  /** Id of the nearest enclosing entry (or the file's own id), or "" for none. */
+  readonly entry: string;
+  /** Path of the object inside the file, for example `materials[3].density`. */
+  readonly path: string;
+  /** Its source id. */
+  readonly source: string;
+  /** The recorded reason: the object's own `note`, else the nearest enclosing one; "" if none. */
+  readonly reason: string;
+}
+
+/**
+ * Every object in the data files whose `basis` is `recalled` (issue 12: each must carry a
+ * recorded reason). Walks each document depth-first; the source and the reason are inherited
+ * from the nearest enclosing object that states one. The bibliography is skipped.
+ *
+ * @param docs the loaded data files (`loadRegistry(...).docs`)
+ * @returns one row per object marked `basis: recalled`, in file order
+ *
+ * @example
+ * ```ts
+ * import { recalledRows } from "./verify.ts";
+ * const rows = recalledRows([{
+ *   file: "x.yaml",
+ *   kind: "materials",
+ *   data: { materials: [{ id: "a", source: "s", basis: "recalled", note: "no copy found" }] },
+ * }]);
+ * if (rows.length !== 1 || rows[0].reason !== "no copy found") throw new Error();
+ * if (rows[0].path !== "materials[0]" || rows[0].entry !== "a") throw new Error();
+ * ```
+ */
+export function recalledRows(
+  // deno-lint-ignore no-explicit-any
+  docs: readonly { readonly file: string; readonly kind: string; readonly data: any }[],
+): RecalledRow[] {
+  const rows: RecalledRow[] = [];
+  const walk = (
+    node: unknown,
+    path: string,
+    file: string,
+    entry: string,
+    source: string,
+    note: string,
+  ): void => {
+    if (Array.isArray(node)) {
+      node.forEach((v, i) => walk(v, `${path}[${i}]`, file, entry, source, note));
+      return;
+    }
+    if (node === null || typeof node !== "object") return;
+    const o = node as Record<string, unknown>;
+    const id = typeof o.id === "string" ? o.id : entry;
+    const src = typeof o.source === "string" ? o.source : source;
+    const why = typeof o.note === "string" ? o.note : note;
+    if (o.basis === "recalled") {
+      rows.push({
+        file,
+        entry: id,
+        path: path || "(file)",
+        source: src,
+        reason: why.replace(/\s+/g, " ").trim(),
+      });
+    }
+    for (const [k, v] of Object.entries(o)) {
+      if (v !== null && typeof v === "object") {
+        walk(v, path ? `${path}.${k}` : k, file, id, src, why);
+      }
+    }
+  };
+  for (const d of docs) {
+    if (d.kind === "sources") continue;
+    walk(d.data, "", d.file, "", "", "");
+  }
+  return rows;
+}

@@ -25,8 +25,8 @@ function horner(k: Float64Array, t: number): number {
  * Speed of sound in pure water at 1 atm by Del Grosso & Mader (1972): c = Σ₀⁵ kᵢ t₆₈ⁱ, a
  * fifth-degree polynomial in the IPTS-68 Celsius temperature. The ITS-90 input is converted
  * with t₆₈ = 1.00024 t₉₀ (Saunders 1990; ≤ 0.01 K from the exact scale difference here).
- * Coefficients entered from memory (basis `recalled`) and confirmed against IAPWS-95 at
- * 101.325 kPa: worst difference 0.062 m/s near 76 °C, a smooth fit residual
+ * Coefficients transcribed from public copies of the paper's table (data/sources.yaml,
+ * copy-del-grosso-mader-1972-coefficients) and confirmed against IAPWS-95 at 101.325 kPa: worst difference 0.062 m/s near 76 °C, a smooth fit residual
  * (tests/reference/water_polynomials.test.ts).
  *
  * Validity: 0–95 °C (273.15–368.15 K) at atmospheric pressure; OutOfRangeError naming
@@ -52,8 +52,8 @@ export function delGrossoMaderSoundSpeed(T: number, options?: ValidityOptions): 
 
 /**
  * Speed of sound in pure water at 1 atm by Marczak (1997): c = Σ₀⁵ kᵢ t₉₀ⁱ, a fifth-degree
- * polynomial in the ITS-90 Celsius temperature. Coefficients entered from memory (basis
- * `recalled`) and checked against IAPWS-95 at 101.325 kPa: worst difference 0.057 m/s near
+ * polynomial in the ITS-90 Celsius temperature. Coefficients transcribed from a public copy
+ * (data/sources.yaml, copy-marczak-1997-coefficients) and checked against IAPWS-95 at 101.325 kPa: worst difference 0.057 m/s near
  * 78 °C; it agrees with Del Grosso–Mader within 0.03 m/s (tests/reference/water_polynomials.test.ts).
  *
  * Validity: 0–95 °C (273.15–368.15 K) at atmospheric pressure; OutOfRangeError naming

@@ -81,7 +81,7 @@ export const waterFormulations: readonly WaterFormulationInfo[] = Object.freeze(
       name: DEL_GROSSO_MADER_NAME,
       source: "del-grosso-mader-1972",
       coefficients: WATER_COEFFICIENT_IDS.delGrossoMader,
-      basis: "recalled",
+      basis: "transcribed",
       provides: ["soundSpeed"],
       temperature: POLYNOMIAL_RANGE,
       pressure: POLYNOMIAL_PRESSURE_RANGE,
@@ -91,7 +91,7 @@ export const waterFormulations: readonly WaterFormulationInfo[] = Object.freeze(
       name: MARCZAK_NAME,
       source: "marczak-1997",
       coefficients: WATER_COEFFICIENT_IDS.marczak,
-      basis: "recalled",
+      basis: "transcribed",
       provides: ["soundSpeed"],
       temperature: POLYNOMIAL_RANGE,
       pressure: POLYNOMIAL_PRESSURE_RANGE,
@@ -311,7 +311,7 @@ export type WaterTraceSubject = WaterFormulation | "viscosity" | "saturation";
  * ```ts
  * import { waterTrace } from "./water.ts";
  * const t = waterTrace("del-grosso-mader");
- * if (t[0].source !== "del-grosso-mader-1972" || t[0].basis !== "recalled") throw new Error();
+ * if (t[0].source !== "del-grosso-mader-1972" || t[0].basis !== "transcribed") throw new Error();
  * ```
  */
 export function waterTrace(formulation: WaterTraceSubject = "iapws95"): readonly TraceEntry[] {

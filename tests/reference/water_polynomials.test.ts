@@ -1,7 +1,7 @@
 /**
  * Del Grosso–Mader (1972) and Marczak (1997) against IAPWS-95 at 1 atm, and the saturation
- * pressure against Debian python3-iapws. The polynomial coefficients are entered from memory
- * (basis `recalled`); these checks are what confirms them numerically.
+ * pressure against Debian python3-iapws. The polynomial coefficients are transcribed from public
+ * copies (tests/reference/props_copies.test.ts); these checks confirm them numerically.
  */
 import { assert, closeRel, throws } from "../_assert.ts";
 import { debianVersion, hasPython, runPython } from "../_python.ts";

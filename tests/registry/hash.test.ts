@@ -63,12 +63,15 @@ Deno.test("the hash ignores key order and comments", () => {
 Deno.test("changing one value changes the hash", () => {
   const base = hashOf();
   const changed = hashOf({
-    "materials.yaml": replaceOnce("{ value: 5920, unit: m/s", "{ value: 5921, unit: m/s"),
+    "materials.yaml": replaceOnce("{ value: 5900, unit: m/s", "{ value: 5901, unit: m/s"),
   });
   assert.notEqual(changed, base);
   // a unit spelled differently is a different datum as written, so it changes the hash too
   const respelled = hashOf({
-    "materials.yaml": replaceOnce("{ value: 7850, unit: kg/m^3", "{ value: 7.85, unit: g/cm^3"),
+    "materials.yaml": replaceOnce(
+      "      value: 7850\n      unit: kg/m^3",
+      "      value: 7.85\n      unit: g/cm^3",
+    ),
   });
   assert.notEqual(respelled, base);
 });

@@ -35,7 +35,7 @@ function refused(
   }
 }
 
-const FIRST_SOURCE = "    source: asm-handbook-17\n    basis: recalled\n";
+const FIRST_SOURCE = "    source: astm-e494\n    basis: transcribed\n";
 
 Deno.test("the unedited temp copy loads (control for the cases below)", () => {
   const dir = tempData();
@@ -48,7 +48,7 @@ Deno.test("the unedited temp copy loads (control for the cases below)", () => {
 });
 
 Deno.test("an entry lacking a source is refused", () => {
-  refused({ "materials.yaml": replaceOnce(FIRST_SOURCE, "    basis: recalled\n") }, {
+  refused({ "materials.yaml": replaceOnce(FIRST_SOURCE, "    basis: transcribed\n") }, {
     file: "materials.yaml",
     entry: "carbon-steel",
     field: "materials[0].source",
@@ -58,12 +58,12 @@ Deno.test("an entry lacking a source is refused", () => {
 
 Deno.test("an unknown source id is refused", () => {
   refused({
-    "materials.yaml": replaceOnce(FIRST_SOURCE, FIRST_SOURCE.replace("-17", "-99")),
+    "materials.yaml": replaceOnce(FIRST_SOURCE, FIRST_SOURCE.replace("e494", "e999")),
   }, {
     file: "materials.yaml",
     entry: "carbon-steel",
     field: "materials[0].source",
-    problem: /unknown source id 'asm-handbook-99'/,
+    problem: /unknown source id 'astm-e999'/,
   });
   // on a datum of its own, not just on the entry
   refused({
@@ -91,8 +91,8 @@ Deno.test("a duplicate id is refused", () => {
 Deno.test("a bad unit is refused", () => {
   refused({
     "materials.yaml": replaceOnce(
-      "longitudinal: { value: 5920, unit: m/s",
-      "longitudinal: { value: 5920, unit: kg",
+      "longitudinal: { value: 5900, unit: m/s",
+      "longitudinal: { value: 5900, unit: kg",
     ),
   }, {
     file: "materials.yaml",
@@ -112,7 +112,7 @@ Deno.test("a bad unit is refused", () => {
 
 Deno.test("non-positive speeds and densities are refused", () => {
   refused({
-    "materials.yaml": replaceOnce("{ value: 5920, unit: m/s", "{ value: -5920, unit: m/s"),
+    "materials.yaml": replaceOnce("{ value: 5900, unit: m/s", "{ value: -5900, unit: m/s"),
   }, {
     file: "materials.yaml",
     entry: "carbon-steel",
@@ -120,7 +120,10 @@ Deno.test("non-positive speeds and densities are refused", () => {
     problem: /greater than 0/,
   });
   refused({
-    "materials.yaml": replaceOnce("{ value: 7850, unit: kg/m^3", "{ value: 0, unit: kg/m^3"),
+    "materials.yaml": replaceOnce(
+      "      value: 7850\n      unit: kg/m^3",
+      "      value: 0\n      unit: kg/m^3",
+    ),
   }, {
     file: "materials.yaml",
     entry: "carbon-steel",

@@ -127,5 +127,5 @@ Deno.test("waterTrace names formulation, source and basis", () => {
   for (const s of ["if97", "del-grosso-mader", "marczak", "viscosity", "saturation"] as const) {
     for (const e of waterTrace(s)) assert.ok(registry.source(e.source), e.source);
   }
-  assert.equal(waterTrace("marczak")[0].basis, "recalled");
+  assert.equal(waterTrace("marczak")[0].basis, "transcribed");
 });
