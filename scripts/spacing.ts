@@ -15,7 +15,8 @@ import {
   PRIMARY_MODE_RULE,
 } from "../lib/acoustics/path.ts";
 import { searchWindow, type WindowUncertainties } from "../lib/acoustics/window.ts";
-import { type OptionSpec, parseCli, runMain } from "./_cli.ts";
+import { givenLine, type OptionSpec, parseCli, runMain } from "./_cli.ts";
+import { inchesSixteenths } from "../lib/report/card.ts";
 
 /** Geometry options shared by spacing.ts and transit.ts. */
 export const GEOMETRY_OPTIONS: OptionSpec = {
@@ -357,6 +358,20 @@ function mm(x: number | undefined, d = 2): string {
 function us(x: number | undefined): string {
   return x === undefined ? "—" : (x * 1e6).toFixed(3);
 }
+/** Words of a line wrapped within 100 columns, continuation lines under `indent`. */
+function wrap100(text: string, indent: string): string[] {
+  const out: string[] = [];
+  const lead = /^ */.exec(text)![0];
+  let line = lead;
+  for (const w of text.slice(lead.length).split(" ")) {
+    if (line && line.length + 1 + w.length > 100) {
+      out.push(line);
+      line = indent + w;
+    } else line = line.trim() ? `${line} ${w}` : line + w;
+  }
+  return [...out, line];
+}
+
 function dg(x: number | undefined): string {
   return x === undefined ? "—" : (x * 180 / Math.PI).toFixed(2);
 }
@@ -409,31 +424,32 @@ function spacingText(
   const out: string[] = [];
   for (const n of geo.notes) out.push(`# ${n}`);
   out.push(
-    `Snell chain: wedge ${dg(geo.inputs.wedgeAngle)} deg → wall ${p0.wallMode} ${
-      dg(p0.wallAngle)
-    } deg${p0.liningAngles.map((a, i) => ` → lining ${i + 1} ${dg(a)} deg`).join("")} → liquid ${
-      dg(p0.fluidAngle)
-    } deg`,
+    `Snell chain: wedge ${dg(geo.inputs.wedgeAngle)}° → wall ${p0.wallMode} ${dg(p0.wallAngle)}°${
+      p0.liningAngles.map((a, i) => ` → lining ${i + 1} ${dg(a)}°`).join("")
+    } → liquid ${dg(p0.fluidAngle)}°`,
   );
   out.push(
-    `critical wedge angles: wall longitudinal ${dg(crit.wallLongitudinal)} deg, wall shear ${
+    `critical wedge angles: wall longitudinal ${dg(crit.wallLongitudinal)}°, wall shear ${
       dg(crit.wallShear)
-    } deg, liquid ${dg(crit.fluid)} deg`,
+    }°, liquid ${crit.fluid === undefined ? "none" : `${dg(crit.fluid)}°`}`,
   );
-  out.push(`wall mode rule: ${PRIMARY_MODE_RULE}`);
+  out.push(...wrap100(`wall mode rule: ${PRIMARY_MODE_RULE}`, "  "));
   for (const m of p0.modes) {
     out.push(
-      m.reachesLiquid
-        ? `  ${m.wallMode.padEnd(12)} ${m.role.padEnd(9)} wall angle ${dg(m.wallAngle)} deg, ` +
-          `arrival ${us(m.totalTime)} us`
-        : `  ${m.wallMode.padEnd(12)} blocked   ${m.blockedBy}`,
+      ...wrap100(
+        m.reachesLiquid
+          ? `  ${m.wallMode.padEnd(12)} ${m.role.padEnd(9)} wall angle ${dg(m.wallAngle)}°, ` +
+            `arrival ${us(m.totalTime)} µs`
+          : `  ${m.wallMode.padEnd(12)} blocked   ${m.blockedBy}`,
+        " ".repeat(25),
+      ),
     );
   }
   out.push(`inside diameter ${mm(p0.insideDiameter)} mm, bore ${mm(p0.boreDiameter)} mm`);
   out.push("");
   const extra = p0.referenceMarkDistance !== undefined;
   out.push(
-    "mounting  traverses  spacing mm  liquid path mm  zero-flow time us" +
+    "mounting  traverses  spacing mm  spacing in  liquid path mm  zero-flow time µs" +
       (p0.elementSpacing !== undefined ? "  element spacing mm" : "") +
       (extra ? "  mark distance mm" : ""),
   );
@@ -442,7 +458,9 @@ function spacingText(
     out.push(
       `${mountingName(p.traverses).padEnd(10)}${String(p.traverses).padEnd(11)}${
         mm(p.spacing).padStart(10)
-      }${mm(p.fluidPathLength).padStart(16)}${us(p.totalTime).padStart(19)}` +
+      }${inchesSixteenths(p.spacing).replace(/ in$/, "").padStart(12)}${
+        mm(p.fluidPathLength).padStart(16)
+      }${us(p.totalTime).padStart(19)}` +
         (p.elementSpacing !== undefined ? mm(p.elementSpacing).padStart(20) : "") +
         (extra ? mm(p.referenceMarkDistance).padStart(18) : "") +
         (other ? `   (${other.wallMode}: ${mm(other.spacing)} mm)` : ""),
@@ -498,7 +516,15 @@ async function main(): Promise<number> {
     ));
     return 0;
   }
-  console.log(spacingText(geo, paths, crit, windows).join("\n"));
+  const out = spacingText(geo, paths, crit, windows);
+  const given = givenLine(values, [
+    ["od", "length"],
+    ["wall", "length"],
+    ["temperature", "temperature"],
+    ["pressure", "pressure"],
+  ]);
+  if (given) out.push(given);
+  console.log(out.join("\n"));
   return 0;
 }
 

@@ -147,7 +147,7 @@ export interface ClampOnPath {
  * critical angle (steel behind an acrylic-class wedge at about 38°) only shear remains.
  */
 export const PRIMARY_MODE_RULE: string =
-  "longitudinal when it reaches the liquid at a wall angle of at most 70 deg, otherwise shear " +
+  "longitudinal when it reaches the liquid at a wall angle of at most 70°, otherwise shear " +
   "(common practice)";
 
 /** Wall angle (rad) above which a longitudinal wall wave is taken as too near grazing. */
@@ -375,8 +375,8 @@ export function clampOnPath(inputs: ClampOnInputs): ClampOnPath {
   const sf = s * cf;
   if (!(sf < 1)) {
     throw new NoPhysicalAnswerError(
-      `no wave reaches the liquid: wedge angle ${deg(aw)} deg is at or beyond the critical ` +
-        `angle ${deg(Math.asin(cw / cf))} deg for the liquid (${cf} m/s behind a ${cw} m/s wedge)`,
+      `no wave reaches the liquid: wedge angle ${deg(aw)}° is at or beyond the critical ` +
+        `angle ${deg(Math.asin(cw / cf))}° for the liquid (${cf} m/s behind a ${cw} m/s wedge)`,
     );
   }
   const cosf = Math.sqrt(1 - sf * sf);
@@ -488,8 +488,8 @@ function liningPath(
     const sl = s * l.soundSpeed;
     if (!(sl < 1)) {
       throw new NoPhysicalAnswerError(
-        `no wave reaches the liquid: wedge angle ${deg(aw)} deg is at or beyond the critical ` +
-          `angle ${deg(Math.asin(cw / l.soundSpeed))} deg for lining layer ${i + 1} ` +
+        `no wave reaches the liquid: wedge angle ${deg(aw)}° is at or beyond the critical ` +
+          `angle ${deg(Math.asin(cw / l.soundSpeed))}° for lining layer ${i + 1} ` +
           `(${l.soundSpeed} m/s)`,
       );
     }
@@ -585,7 +585,7 @@ function wallModePath(
       get blockedBy(): string {
         const which = mode === "longitudinal" ? "first" : "second";
         return `wall ${mode} wave beyond the ${which} critical angle ` +
-          `${deg(Math.asin(cw / c))} deg (wedge angle ${deg(aw)} deg, wall ${c} m/s)`;
+          `${deg(Math.asin(cw / c))}° (wedge angle ${deg(aw)}°, wall ${c} m/s)`;
       },
     };
   }

@@ -36,8 +36,8 @@ Deno.test("spacing: beyond the critical angles exits 1 naming them, one line, no
   args[args.indexOf("38 deg")] = "62 deg";
   const r = await runScript("spacing.ts", args);
   assert.equal(r.code, 1);
-  assert.match(r.stderr, /critical angle 27\.35 deg/);
-  assert.match(r.stderr, /critical angle 57\.36 deg/);
+  assert.match(r.stderr, /critical angle 27\.35°/);
+  assert.match(r.stderr, /critical angle 57\.36°/);
   assert.equal(r.stderr.trim().split("\n").length, 1);
 });
 
