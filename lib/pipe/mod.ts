@@ -12,6 +12,7 @@
  * @module
  */
 export { defaultStandard, pipe, PLAUSIBLE_OUTSIDE_DIAMETER } from "./resolve.ts";
+export { type DescribedPipe, pipeDescription } from "./describe.ts";
 export type {
   PipeCatalogueSpec,
   PipeLiningLayer,

@@ -5,6 +5,7 @@
  *
  * @module
  */
+import { pipeDescription } from "../../pipe/describe.ts";
 import type { Warning } from "../../errors.ts";
 import type { TraceEntry } from "../../trace.ts";
 import type { SiteInput } from "../schema.ts";
@@ -127,9 +128,7 @@ export function pipeSection(p: PipeStage, sp: SiteInput["pipe"]): SitePlan["pipe
       thickness,
       soundSpeed,
     })),
-    description: rp.origin === "catalogue"
-      ? `${rp.standard} NPS ${rp.nps} schedule ${rp.schedule}`
-      : "measured pipe",
+    description: pipeDescription(rp),
     measuredWallThickness: sp.measuredWallThickness,
   };
 }
