@@ -48,6 +48,7 @@ export const DEFAULT_MOUNTINGS: readonly number[] = [1, 2];
 export const LIMITS = {
   outsideDiameter: { min: 1e-3, max: 10, unit: "mm" },
   circumference: { min: Math.PI * 1e-3, max: Math.PI * 10, unit: "mm" },
+  tapeThickness: { min: 0, max: 0.01, unit: "mm" },
   wallThickness: { min: 0, max: 0.5, unit: "mm", minOpen: true },
   roughness: { min: 0, max: 0.05, unit: "mm" },
   soundSpeed: { min: 100, max: 20000, unit: "m/s" },
@@ -114,6 +115,23 @@ async function readPipe(ctx: Ctx, top: Record<string, unknown>, defaults: SiteDe
     L.circumference,
     "a circumference",
   );
+  const tape = await quantity(
+    ctx,
+    o,
+    "tapeThickness",
+    "pipe",
+    "length",
+    L.tapeThickness,
+    "the thickness of the tape round the pipe",
+  );
+  if (tape !== undefined && circ === undefined) {
+    fail(
+      ctx,
+      "pipe.tapeThickness",
+      "a tape thickness without a circumference",
+      "pipe.circumference",
+    );
+  }
   const wall = await quantity(
     ctx,
     o,
@@ -175,6 +193,7 @@ async function readPipe(ctx: Ctx, top: Record<string, unknown>, defaults: SiteDe
   }
   if (od !== undefined) p.outsideDiameter = od;
   if (circ !== undefined) p.circumference = circ;
+  if (tape !== undefined) p.tapeThickness = tape;
   if (wall !== undefined) p.wallThickness = wall;
   const material = ident(ctx, o, "material", "pipe", "a material");
   if (material !== undefined) p.material = material;

@@ -49,6 +49,8 @@ export interface SitePipe {
   outsideDiameter?: number;
   /** Measured circumference, m. */
   circumference?: number;
+  /** Thickness of the tape the circumference was taped with, m (OD = C/π − 2·tape). */
+  tapeThickness?: number;
   /** Wall thickness of the measured pipe, m. */
   wallThickness?: number;
   /** Pipe material id, for example `carbon-steel`. */
@@ -357,6 +359,7 @@ const siteCheck = strict({
     schedule: opt(text1),
     outsideDiameter: opt(positive),
     circumference: opt(positive),
+    tapeThickness: opt(nonNegative),
     wallThickness: opt(positive),
     material: opt(idText),
     wallSoundSpeed: opt(positive),
@@ -490,6 +493,7 @@ export const SITE_KEYS: Readonly<Record<string, readonly string[]>> = {
     "schedule",
     "outsideDiameter",
     "circumference",
+    "tapeThickness",
     "wallThickness",
     "material",
     "wallSoundSpeed",

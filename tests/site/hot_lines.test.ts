@@ -32,10 +32,11 @@ Deno.test("a taped 600 mm cement-lined ductile-iron main plans as the catalogue 
     await readSiteText(site(PIPES[2], 12, "4 bar").replace(/flow: .*/, flow)),
     { monteCarlo: false },
   );
-  // the tape round the pipe: C = π·OD, OD from the catalogue row, wall from a gauge
-  const od = cat.pipe.outsideDiameter;
-  const taped = "{ circumference: " + (Math.PI * od * 1000).toFixed(1) + " mm, " +
-    "wallThickness: 10.9 mm, material: ductile-iron, " +
+  // the tape round the pipe, read at its mid-thickness: C = π·(OD + t), so OD = C/π − t (the
+  // convention of lib/pipe); OD from the catalogue row, wall from a gauge
+  const od = cat.pipe.outsideDiameter, tape = 0.25e-3;
+  const taped = "{ circumference: " + (Math.PI * (od + tape) * 1000).toFixed(1) + " mm, " +
+    "tapeThickness: 0.25 mm, wallThickness: 10.9 mm, material: ductile-iron, " +
     "lining: { material: cement-mortar, thickness: 2.4 mm } }";
   const plan = planSite(
     await readSiteText(site(taped, 12, "4 bar").replace(/flow: .*/, flow)),

@@ -30,6 +30,7 @@ const ZodSite = z.strictObject({
     schedule: z.string().min(1).optional(),
     outsideDiameter: positive.optional(),
     circumference: positive.optional(),
+    tapeThickness: nonNegative.optional(),
     wallThickness: positive.optional(),
     material: idText.optional(),
     wallSoundSpeed: positive.optional(),

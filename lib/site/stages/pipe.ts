@@ -100,6 +100,7 @@ export function planPipe(input: PipeStageInput): PipeStage {
     spec = {
       outsideDiameter: sp.outsideDiameter,
       circumference: sp.circumference,
+      tapeThickness: sp.tapeThickness,
       wallThickness: sp.wallThickness!,
       material: sp.material,
       lining: liningIn,
