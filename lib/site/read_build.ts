@@ -92,8 +92,22 @@ async function readPipe(ctx: Ctx, top: Record<string, unknown>, defaults: SiteDe
     );
   }
   const o = expectRecord(ctx, raw, "pipe");
-  const L = LIMITS;
   const p: Partial<SitePipe> = {};
+  const sizes = await readPipeSizes(ctx, o, p, defaults);
+  const mwt = await readPipeWall(ctx, o, p);
+  const lin = await readPipeLining(ctx, o, p);
+  checkWallWithinRadius(ctx, o, p, { ...sizes, mwt, linThickness: lin?.thickness });
+  return p as SitePipe;
+}
+
+/** Catalogue size (standard, nps, schedule) and measured size, and the rules across them. */
+async function readPipeSizes(
+  ctx: Ctx,
+  o: Record<string, unknown>,
+  p: Partial<SitePipe>,
+  defaults: SiteDefault[],
+): Promise<{ od?: number; circ?: number; wall?: number }> {
+  const L = LIMITS;
   const standard = text(ctx, o, "standard", "pipe", 40);
   const n = o.nps === undefined ? undefined : nps(ctx, o.nps, "pipe.nps");
   const s = o.schedule === undefined ? undefined : schedule(ctx, o.schedule, "pipe.schedule");
@@ -195,6 +209,16 @@ async function readPipe(ctx: Ctx, top: Record<string, unknown>, defaults: SiteDe
   if (circ !== undefined) p.circumference = circ;
   if (tape !== undefined) p.tapeThickness = tape;
   if (wall !== undefined) p.wallThickness = wall;
+  return { od, circ, wall };
+}
+
+/** Material, wall sound speeds, the gauged wall and roughness; returns the gauged wall. */
+async function readPipeWall(
+  ctx: Ctx,
+  o: Record<string, unknown>,
+  p: Partial<SitePipe>,
+): Promise<number | undefined> {
+  const L = LIMITS;
   const material = ident(ctx, o, "material", "pipe", "a material");
   if (material !== undefined) p.material = material;
   const ws = await quantity(
@@ -229,6 +253,16 @@ async function readPipe(ctx: Ctx, top: Record<string, unknown>, defaults: SiteDe
   if (mwt !== undefined) p.measuredWallThickness = mwt;
   const rough = await quantity(ctx, o, "roughness", "pipe", "length", L.roughness, "a roughness");
   if (rough !== undefined) p.roughness = rough;
+  return mwt;
+}
+
+/** The lining, when given; returns its raw section for messages. */
+async function readPipeLining(
+  ctx: Ctx,
+  o: Record<string, unknown>,
+  p: Partial<SitePipe>,
+): Promise<Record<string, unknown> | undefined> {
+  const L = LIMITS;
   const lin = sub(ctx, o, "lining", "pipe");
   if (lin) {
     const lm = required(
@@ -259,7 +293,17 @@ async function readPipe(ctx: Ctx, top: Record<string, unknown>, defaults: SiteDe
       ? { material: lm, thickness: lt }
       : { material: lm, thickness: lt, soundSpeed: lc };
   }
-  // Wall (and lining) thinner than the radius, where the outside diameter is known here.
+  return lin;
+}
+
+/** Wall (and lining) thinner than the radius, where the outside diameter is known here. */
+function checkWallWithinRadius(
+  ctx: Ctx,
+  o: Record<string, unknown>,
+  p: Partial<SitePipe>,
+  k: { od?: number; circ?: number; wall?: number; mwt?: number; linThickness?: unknown },
+): void {
+  const { od, circ, wall, mwt } = k;
   const outer = od ?? (circ !== undefined ? circ / Math.PI : undefined);
   if (outer !== undefined) {
     const liner = p.lining?.thickness ?? 0;
@@ -268,13 +312,12 @@ async function readPipe(ctx: Ctx, top: Record<string, unknown>, defaults: SiteDe
         fail(
           ctx,
           `pipe.${key}`,
-          `${describe(o[key])}${liner ? ` plus lining ${describe(lin?.thickness)}` : ""}`,
+          `${describe(o[key])}${liner ? ` plus lining ${describe(k.linThickness)}` : ""}`,
           `less than the outside radius ${fmtMm(outer / 2)} mm`,
         );
       }
     }
   }
-  return p as SitePipe;
 }
 
 function fmtMm(x: number): string {
