@@ -175,6 +175,16 @@ runMain(() => {
         deg(rank.recommendedOrientation)
       } from vertical`,
     );
+    const pp = rank.recommendedPathPlane;
+    const clock = (h: number) =>
+      `${Math.floor(h) === 0 ? 12 : Math.floor(h)}:${h % 1 ? "30" : "00"}`;
+    console.log(
+      `transducers               ${
+        pp.sameSide
+          ? `both at ${clock(pp.clockHours[0])} o'clock`
+          : `${clock(pp.clockHours[0])} and ${clock(pp.clockHours[1])} o'clock`
+      }, looking downstream (12 o'clock at the crown)`,
+    );
     console.log("");
     console.log("  position      plane   est. error   downstream   straight run");
     for (const r of rank.ranking.slice(0, 8)) {
