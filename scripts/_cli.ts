@@ -225,8 +225,9 @@ export function optionalQuantity(
 
 /**
  * One line echoing the quantity options as the user wrote them, each beside its SI value
- * (`as given: --temperature 68 degF = 293.15 K, --pressure 30 psig = 308168 Pa`); empty when
- * none was given.
+ * (`as given: --temperature 68 degF = 293.15 K, --pressure 30 psig = 308168 Pa`), SI units
+ * written m³/s, m²/s; lines within 100 columns (continuations indented); empty when none was
+ * given.
  *
  * @param values parsed values
  * @param specs option names without dashes and their dimensions
@@ -249,7 +250,18 @@ export function givenLine(
     if (typeof v !== "string") continue;
     const x = parseQuantity(v, dim, `--${name}`);
     const unit = dim === "temperature" ? "K" : dim === "temperatureDifference" ? "K" : SI_UNIT[dim];
-    parts.push(`--${name} ${v.trim()} = ${Number(x.toPrecision(6))}${unit ? " " + unit : ""}`);
+    const shown = unit.replace(/\^2/g, "²").replace(/\^3/g, "³");
+    parts.push(`--${name} ${v.trim()} = ${Number(x.toPrecision(6))}${shown ? " " + shown : ""}`);
   }
-  return parts.length ? `as given: ${parts.join(", ")}` : "";
+  if (!parts.length) return "";
+  // within 100 columns: continuation lines under the first part
+  const lines = [`as given: ${parts[0]}`];
+  for (const part of parts.slice(1)) {
+    const last = lines[lines.length - 1];
+    if (last.length + 2 + part.length > 100) {
+      lines[lines.length - 1] += ",";
+      lines.push(`          ${part}`);
+    } else lines[lines.length - 1] = `${last}, ${part}`;
+  }
+  return lines.join("\n");
 }
