@@ -92,7 +92,8 @@ function squash(s: string): string {
 }
 
 /**
- * The nearest valid key to a wrong one, when it is near enough to be a likely typo.
+ * The nearest valid key to a wrong one: the one valid key a shortened key begins (4 characters
+ * or more), else the nearest by edit distance when it is near enough to be a likely typo.
  *
  * @param key the key given
  * @param valid the valid keys
@@ -100,6 +101,9 @@ function squash(s: string): string {
  */
 export function suggestKey(key: string, valid: readonly string[]): string | undefined {
   const k = squash(key);
+  // a shortened key (`target` for `targetUncertainty`): the one valid key it begins
+  const starts = k.length >= 4 ? valid.filter((v) => squash(v).startsWith(k)) : [];
+  if (starts.length === 1) return starts[0];
   let best: string | undefined;
   let bestD = Infinity;
   for (const v of valid) {

@@ -376,3 +376,17 @@ Deno.test("a fleet CSV may leave out the downstream fitting", async () => {
   assert.equal(sites[0].run?.downstream, undefined);
   assert.equal(sites[1].run?.downstream?.fitting, "gate-valve");
 });
+
+Deno.test("a shortened key is pointed at the one key it begins (target → targetUncertainty)", async () => {
+  const base = await Deno.readTextFile("data/demo/01-reservoir-outlet.yaml");
+  let msg = "";
+  try {
+    await readSiteText(base + "\ntarget: 2 %\n");
+  } catch (e) {
+    msg = (e as Error).message;
+  }
+  assert.match(
+    msg,
+    /target: got an unknown key; expected a key of the site; did you mean "targetUncertainty"\?/,
+  );
+});
