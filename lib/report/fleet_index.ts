@@ -73,8 +73,12 @@ function cell(row: readonly (string | number)[], i: number, href: string): strin
       return verdictCell(c);
     case COL.spacing:
       return `<td class="num">${escapeHtml(c)} mm</td>`;
-    case COL.expanded:
-      return `<td class="num">${escapeHtml(c)} %</td>`;
+    case COL.expanded: {
+      // an uncertainty to two significant digits (GUM 7.2.6); the CSV keeps more for machines
+      const x = Number(row[i]);
+      const shown = Number.isFinite(x) ? String(Number(x.toPrecision(2))) : c;
+      return `<td class="num">${escapeHtml(shown)} %</td>`;
+    }
     case COL.hash:
       return `<td title="${escapeHtml(c)}"><code>${escapeHtml(c.slice(0, 12))}…</code></td>`;
     default:
