@@ -1,0 +1,139 @@
+/**
+ * Second pass of issue 12 (items 1 and 4) on materials, liquids, flow tables and fittings:
+ * registry values against the public copies recorded in data/sources.yaml. Every expected
+ * number below is typed from the copy named beside it, not from our data or code, so a
+ * transcription slip or a later edit that drifts from the copy fails here.
+ */
+import { assert } from "../_assert.ts";
+import { defaultRegistry, recalledRows } from "../../lib/registry/mod.ts";
+import { liquidProperties } from "../../lib/liquids/mod.ts";
+import { powerLawExponent } from "../../lib/flow/mod.ts";
+
+const reg = defaultRegistry();
+
+// ---------------------------------------------------------------- ductile iron (computed)
+
+// copy-ductile-iron-elastic, three public web copies:
+//   amesweb.info "Young's Modulus of Iron": ductile iron E 162 to 170 GPa;
+//   makeitfrom.com ductile cast iron: E 170 to 180 GPa, Poisson's ratio 0.28 to 0.31,
+//     density 7.1 to 7.5 g/cm³;
+//   material-properties.org ductile cast iron: density 7300 kg/m³, E 170 GPa.
+const E_GPA = [162, 180];
+const NU = [0.28, 0.31];
+const RHO = [7100, 7300]; // makeitfrom's low end and material-properties.org
+
+/** Isotropic solid: longitudinal and shear bulk-wave speeds from E, ν, ρ. */
+function speeds(e: number, nu: number, rho: number): [number, number] {
+  return [
+    Math.sqrt(e * (1 - nu) / (rho * (1 + nu) * (1 - 2 * nu))),
+    Math.sqrt(e / (2 * rho * (1 + nu))),
+  ];
+}
+
+Deno.test("ductile iron: speeds span what E, ν, ρ of copy-ductile-iron-elastic give an isotropic solid", () => {
+  const m = reg.material("ductile-iron");
+  let lLo = Infinity, lHi = -Infinity, sLo = Infinity, sHi = -Infinity;
+  for (const e of E_GPA) {
+    for (const nu of NU) {
+      for (const rho of RHO) {
+        const [cl, cs] = speeds(e * 1e9, nu, rho);
+        lLo = Math.min(lLo, cl), lHi = Math.max(lHi, cl);
+        sLo = Math.min(sLo, cs), sHi = Math.max(sHi, cs);
+      }
+    }
+  }
+  const lSpread = m.longitudinalSpread!, sSpread = m.shearSpread!;
+  // every corner of the copies' ranges lies inside value ± spread …
+  assert.ok(
+    m.longitudinal - lSpread <= lLo && lHi <= m.longitudinal + lSpread,
+    `c_L ${lLo}–${lHi}`,
+  );
+  assert.ok(m.shear! - sSpread <= sLo && sHi <= m.shear! + sSpread, `c_S ${sLo}–${sHi}`);
+  // … and the spread is no wider than the range rounded out to 10 m/s (no padding)
+  assert.ok(lSpread - (lHi - lLo) / 2 < 10, `longitudinal spread ${lSpread}`);
+  assert.ok(sSpread - (sHi - sLo) / 2 < 10, `shear spread ${sSpread}`);
+  assert.ok(Math.abs(m.longitudinal - (lLo + lHi) / 2) < 10, "longitudinal at mid-range");
+  assert.ok(Math.abs(m.shear! - (sLo + sHi) / 2) < 10, "shear at mid-range");
+  // density: the copies' 7100–7300 kg/m³ as value ± spread
+  assert.equal(m.density - m.densitySpread!, RHO[0]);
+  assert.equal(m.density + m.densitySpread!, RHO[1]);
+});
+
+Deno.test("ductile iron: the entry says computed and no longer rests on memory", () => {
+  const rows = recalledRows(reg.loaded.docs).filter((r) =>
+    r.file === "materials.yaml" && r.entry === "ductile-iron"
+  );
+  assert.equal(rows.length, 0, JSON.stringify(rows));
+  const doc = reg.loaded.docs.find((d) => d.file === "materials.yaml")!;
+  // deno-lint-ignore no-explicit-any
+  const raw = (doc.data as any).materials.find((x: { id: string }) => x.id === "ductile-iron");
+  assert.equal(raw.basis, "computed");
+  assert.equal(raw.source, "copy-ductile-iron-elastic");
+  assert.match(raw.note, /sqrt\(E\(1-nu\)/, "the note states the formula");
+});
+
+// ---------------------------------------------------------------- flow tables
+
+// copy-schlichting-nikuradse-n: Schlichting, Boundary-Layer Theory, text beside Fig. 20.2
+// (n = 6 at R = 4 x 10^3, n = 7 at about 1.1 x 10^5, n = 10 at 3240 x 10^3), and the
+// Bird, Stewart & Lightfoot exercise (near Re 4 x 10^3 n = 6; 1.1 x 10^5 n = 7; 3.2 x 10^6 n = 10).
+const NIKURADSE_COPY: [number, number][] = [[4e3, 6], [1.1e5, 7], [3.2e6, 10]];
+
+Deno.test("Nikuradse n: the three rows in copy-schlichting-nikuradse-n equal the copies, and the code returns them", () => {
+  const t = reg.table("nikuradse-power-law-n");
+  type Row = Readonly<Record<string, number | string>>;
+  const rows = t.rows as readonly Row[];
+  for (const [re, n] of NIKURADSE_COPY) {
+    const row = rows.find((r) => r.reynolds === re);
+    assert.ok(row, `a row at Re ${re}`);
+    assert.equal(row.n, n, `n at Re ${re}`);
+    assert.equal(row.basis, "transcribed", `row at Re ${re} marked transcribed`);
+    // the interpolating code reproduces the copy at its own points
+    assert.ok(Math.abs(powerLawExponent(re) - n) < 1e-12, `powerLawExponent(${re})`);
+  }
+  // rows the copies do not show stay under the file's recalled basis, with the reason
+  assert.equal(t.basis, "recalled");
+  const others = rows.filter((r) => !NIKURADSE_COPY.some(([re]) => re === r.reynolds));
+  assert.equal(others.length, 3);
+  for (const r of others) assert.equal(r.basis, undefined, `row ${r.reynolds} not marked`);
+  assert.match(t.note!, /appear in no public\s+copy/);
+});
+
+// copy-white-log-law: White, Fluid Mechanics, ch. 6: kappa ≈ 0.41, B ≈ 5.0 (smooth walls);
+// Bailey et al., J. Fluid Mech. 749 (2014): kappa = 0.40 ± 0.02 for smooth pipe flow.
+Deno.test("log law: κ and B equal White's values (copy-white-log-law); κ inside Bailey et al.'s 0.40 ± 0.02", () => {
+  const c = reg.coefficients("log-law");
+  assert.equal(c.basis, "transcribed");
+  assert.equal(c.coefficients.kappa, 0.41);
+  assert.equal(c.coefficients.B, 5.0);
+  assert.ok(Math.abs((c.coefficients.kappa as number) - 0.40) <= 0.02);
+});
+
+// ---------------------------------------------------------------- glycerol
+
+// copy-liquid-sound-table: Engineering ToolBox, "Glycerol (glycerine) (25oC)" 1920 m/s;
+// copy-bar-meir-sound-liquids: Bar-Meir, Table 3.2 (after Aldred 1972), glycerol 1904 m/s.
+Deno.test("glycerol: the sound speed is the mean of the two copies and its spread reaches both with room", () => {
+  const s = liquidProperties("glycerol", 298.15);
+  assert.equal(s.soundSpeed, (1920 + 1904) / 2);
+  for (const c of [1920, 1904]) {
+    const margin = s.soundSpeedSpread - Math.abs(s.soundSpeed - c);
+    assert.ok(margin >= 10, `${c} m/s inside ${s.soundSpeed} ± ${s.soundSpeedSpread}`);
+  }
+});
+
+// ---------------------------------------------------------------- fittings (common practice)
+
+Deno.test("fittings: every recalled disturbance row records its own reason (straight runs: common practice)", () => {
+  const rows = recalledRows(reg.loaded.docs).filter((r) => r.file === "fittings.yaml");
+  assert.ok(rows.length > 0);
+  for (const r of rows) {
+    // a reason, not a remark on the reference plane inherited from the entry
+    assert.match(r.reason, /recalled|engineering judgement/i, `${r.entry} ${r.path}: ${r.reason}`);
+  }
+  const doc = reg.loaded.docs.find((d) => d.file === "fittings.yaml")!;
+  // deno-lint-ignore no-explicit-any
+  for (const f of (doc.data as any).fittings) {
+    assert.equal(f.straightRun.basis, "common-practice", `${f.id} straight run`);
+  }
+});
