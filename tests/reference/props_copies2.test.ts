@@ -137,3 +137,58 @@ Deno.test("fittings: every recalled disturbance row records its own reason (stra
     assert.equal(f.straightRun.basis, "common-practice", `${f.id} straight run`);
   }
 });
+
+// ---------------------------------------------------------------- plastics densities
+
+// copy-plastics-density, g/cm³ → kg/m³: PMC9088909 Table 1 and the 24kjx.com.cn table.
+const PMC: Record<string, [number, number]> = {
+  LDPE: [914, 940],
+  HDPE: [952, 965],
+  PP: [900, 910],
+  PVC: [1300, 1580],
+  PMMA: [1170, 1200],
+};
+const KJX: Record<string, [number, number]> = {
+  LDPE: [910, 925],
+  MDPE: [926, 940],
+  HDPE: [940, 965],
+  PP: [900, 915],
+  "PVC-U": [1300, 1450],
+  PMMA: [1170, 1190],
+};
+
+/** [material, copy rows whose union the value ± spread must equal (to rounding outward)]. */
+const DENSITY_UNION: [string, [number, number][]][] = [
+  ["hdpe", [PMC.HDPE, KJX.HDPE]],
+  ["pp", [PMC.PP, KJX.PP]],
+  ["pvc", [KJX["PVC-U"]]],
+  ["polyethylene-lining", [KJX.LDPE, KJX.MDPE, PMC.LDPE]],
+];
+
+Deno.test("plastics: densities are the ranges of copy-plastics-density (mid-range ± half, rounded outward)", () => {
+  for (const [id, rows] of DENSITY_UNION) {
+    const lo = Math.min(...rows.map((r) => r[0]));
+    const hi = Math.max(...rows.map((r) => r[1]));
+    const m = reg.material(id);
+    const a = m.density - m.densitySpread!, b = m.density + m.densitySpread!;
+    assert.ok(a <= lo && hi <= b, `${id}: ${a}–${b} kg/m³ vs copies ${lo}–${hi}`);
+    assert.ok(lo - a <= 1 && b - hi <= 1, `${id}: no more than 1 kg/m³ of rounding`);
+  }
+  // PVC: the broad PMC row (all grades) contains the rigid-PVC band used
+  const pvc = reg.material("pvc");
+  assert.ok(PMC.PVC[0] <= pvc.density - pvc.densitySpread!);
+  // acrylic (transcribed from ASTM E494: 1180 kg/m³) lies in both PMMA rows
+  const acrylic = reg.material("acrylic").density;
+  for (const [lo, hi] of [PMC.PMMA, KJX.PMMA]) assert.ok(lo <= acrylic && acrylic <= hi);
+});
+
+// copy-pg-density-note: propylene glycol 1.037 g/mL at 25 °C (one copy; value kept, spread widened).
+Deno.test("propylene glycol: the density spread reaches the one public copy (1037 kg/m³ at 25 °C)", () => {
+  const p = liquidProperties("propylene-glycol", 298.15);
+  const doc = reg.loaded.docs.find((d) => d.file === "liquids.yaml")!;
+  // deno-lint-ignore no-explicit-any
+  const raw = (doc.data as any).liquids.find((x: { id: string }) => x.id === "propylene-glycol");
+  const spread = raw.density.spread as number;
+  assert.ok(Math.abs(p.density - 1037) <= spread, `${p.density} ± ${spread} vs 1037`);
+  assert.match(raw.density.note, /copy-pg-density-note/);
+});
