@@ -192,3 +192,48 @@ Deno.test("propylene glycol: the density spread reaches the one public copy (103
   assert.ok(Math.abs(p.density - 1037) <= spread, `${p.density} ± ${spread} vs 1037`);
   assert.match(raw.density.note, /copy-pg-density-note/);
 });
+
+// ---------------------------------------------------------------- liquids: spot checks
+
+// copy-viscosity-25c: preproom.org "Viscosity of Liquids" (water 0.894 cP, so 25 °C), cP = mPa·s.
+const VISCOSITY_25C: [string, number, number][] = [
+  // [liquid, copy value mPa·s, allowed relative difference]
+  ["acetone", 0.306, 1e-9],
+  ["methanol", 0.544, 1e-9],
+  ["ethanol", 1.074, 1e-9],
+  ["ethylene-glycol", 16.1, 1e-9],
+  ["glycerol", 934, 0.02], // between table points (20 and 30 °C): interpolated
+];
+
+Deno.test("liquids: viscosities at 25 °C agree with copy-viscosity-25c", () => {
+  for (const [id, mPaS, tol] of VISCOSITY_25C) {
+    const mu = liquidProperties(id, 298.15).dynamicViscosity * 1e3;
+    assert.ok(Math.abs(mu - mPaS) <= tol * mPaS, `${id}: ${mu} vs ${mPaS} mPa s`);
+  }
+});
+
+// copy-density-20c: textbook table at 20 °C, 1 atm, kg/m³.
+const DENSITY_20C: [string, number][] = [
+  ["methanol", 791],
+  ["ethanol", 789],
+  ["glycerol", 1260],
+  ["kerosene", 804],
+];
+
+Deno.test("liquids: densities at 20 °C lie inside the stated spreads of copy-density-20c's values", () => {
+  const doc = reg.loaded.docs.find((d) => d.file === "liquids.yaml")!;
+  // deno-lint-ignore no-explicit-any
+  const entries = (doc.data as any).liquids as { id: string; density: { spread: number } }[];
+  for (const [id, rho] of DENSITY_20C) {
+    const spread = entries.find((e) => e.id === id)!.density.spread;
+    const got = liquidProperties(id, 293.15).density;
+    assert.ok(Math.abs(got - rho) <= spread, `${id}: ${got} ± ${spread} vs ${rho}`);
+  }
+  // the copy's gasoline (680 kg/m³) is far outside: recorded in the note, not applied
+  const gas = liquidProperties("gasoline", 293.15).density;
+  const gasSpread = entries.find((e) => e.id === "gasoline")!.density.spread;
+  assert.ok(Math.abs(gas - 680) > gasSpread);
+  const note = (doc.data as { liquids: { id: string; note: string }[] }).liquids
+    .find((e) => e.id === "gasoline")!.note;
+  assert.match(note, /copy-density-20c/);
+});
