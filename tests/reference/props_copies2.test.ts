@@ -237,3 +237,22 @@ Deno.test("liquids: densities at 20 °C lie inside the stated spreads of copy-de
     .find((e) => e.id === "gasoline")!.note;
   assert.match(note, /copy-density-20c/);
 });
+
+// ---------------------------------------------------------------- 316 and glass densities
+
+// copy-stainless-316-density: tubingchina.com table, 316: 7.98 kg/dm³; compraco.com.br, 8.0 g/cm³.
+// copy-borosilicate-density: matmatch.com (ISO 3585 glass 3.3) and huayuanglass.com, 2.23 g/cm³.
+Deno.test("densities of 316 and borosilicate glass equal their first copy; the spread reaches the other", () => {
+  const s316 = reg.material("stainless-steel-316");
+  assert.equal(s316.density, 7980);
+  assert.ok(Math.abs(s316.density - 8000) <= s316.densitySpread!);
+  const glass = reg.material("glass");
+  assert.equal(glass.density, 2230);
+  // the CRC reprint's 2320 kg/m³ (copy-crc-sound-solids) is still inside the spread
+  assert.ok(Math.abs(glass.density - 2320) <= glass.densitySpread!);
+  const rows = recalledRows(reg.loaded.docs).filter((r) =>
+    r.file === "materials.yaml" && /^(stainless-steel-316|glass)$/.test(r.entry) &&
+    r.path.endsWith(".density")
+  );
+  assert.equal(rows.length, 0, JSON.stringify(rows));
+});
