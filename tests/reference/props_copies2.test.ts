@@ -256,3 +256,16 @@ Deno.test("densities of 316 and borosilicate glass equal their first copy; the s
   );
   assert.equal(rows.length, 0, JSON.stringify(rows));
 });
+
+// copy-mazeika-2010-pe80: PE80 pipe material, longitudinal 2030–2060 m/s at 1.0–3.5 MHz.
+Deno.test("polyethylene: the PE80 measurements lie in the lining's spread and the HDPE note records the gap", () => {
+  const lining = reg.material("polyethylene-lining");
+  for (const c of [2030, 2060]) {
+    assert.ok(Math.abs(lining.longitudinal - c) <= lining.longitudinalSpread!, `lining vs ${c}`);
+  }
+  const hdpe = reg.material("hdpe");
+  assert.ok(hdpe.longitudinal - hdpe.longitudinalSpread! > 2060, "HDPE row is above PE80");
+  const note = recalledRows(reg.loaded.docs)
+    .find((r) => r.entry === "hdpe" && /^materials\[\d+\]$/.test(r.path))!.reason;
+  assert.match(note, /copy-mazeika-2010-pe80/);
+});
