@@ -116,8 +116,10 @@ runMain(() => {
   } else {
     console.log(`registry ${reg.hash.slice(0, 16)}…: ${results.length} verification tables`);
     for (const r of results) {
-      console.log(
-        `\n${r.status.toUpperCase().padEnd(7)} ${r.id} — ${r.formulation} [source ${r.source}]`,
+      console.log("");
+      fit2(
+        `${r.status.toUpperCase().padEnd(7)} ${r.id} — ${r.formulation}`,
+        `[source ${r.source}]`,
       );
       if (r.reason) {
         console.log(`        ${r.reason}`);
@@ -133,11 +135,13 @@ runMain(() => {
         } (tolerance ${worst.tolerance})`,
       );
       for (const c of show) {
-        const inp = Object.entries(c.inputs).map(([k, v]) => `${k}=${v}`).join(" ");
-        console.log(
-          `        ${c.ok ? "pass" : "FAIL"} row ${c.row} ${inp}: ${c.column} expected ${
-            g(c.expected)
-          } computed ${g(c.computed)} rel ${c.relDiff.toExponential(2)}`,
+        const inp = Object.entries(c.inputs).map(([k, v]) => `${k}=${+v.toPrecision(8)}`)
+          .join(" ");
+        fit2(
+          `        ${c.ok ? "pass" : "FAIL"} row ${c.row} ${inp}:`,
+          `${c.column} expected ${g(c.expected)} computed ${g(c.computed)} rel ${
+            c.relDiff.toExponential(2)
+          }`,
         );
       }
     }
@@ -150,6 +154,13 @@ runMain(() => {
   }
   return failed > 0 || instFailed > 0 || (values.strict && notRun > 0) ? 1 : 0;
 });
+
+/** Print head and tail on one line when it fits in 100 columns, else the tail on a second line
+ * indented by 10 (a tail that still does not fit is printed whole: no number is cut). */
+function fit2(head: string, tail: string): void {
+  if ([...head].length + 1 + [...tail].length <= 100) console.log(`${head} ${tail}`);
+  else console.log(`${head}\n          ${tail}`);
+}
 
 /** Installation section: one line per published statement (worst point), failures in full;
  * every line within 100 columns. */

@@ -147,7 +147,7 @@ const SECOND_COPY: [string, keyof Row, Row][] = [
   ["acrylic", "shear", CRC["Lucite"]],
   ["acrylic", "density", CRC["Lucite"]],
   ["stainless-steel-304", "density", E494["Stainless steel (347)"]],
-  // the glass density stays recalled (2230) with a spread that reaches the CRC reprint's 2320
+  // the glass density (2230, two copies in props_copies2) keeps a spread reaching the CRC 2320
   ["glass", "density", CRC["Glass, pyrex"]],
 ];
 
