@@ -5,7 +5,7 @@
  * @module
  */
 import { InputError, SnellpathError } from "../lib/errors.ts";
-import { defaultRegistry } from "../lib/registry/mod.ts";
+import { defaultRegistry, type Registry } from "../lib/registry/mod.ts";
 import { readSiteFile, readSitesCsvText, siteFiles, streamSitesCsv } from "../lib/site/read.ts";
 import type { SiteInput } from "../lib/site/schema.ts";
 import { planSite } from "../lib/site/plan.ts";
@@ -224,8 +224,24 @@ class WorkerPool {
   }
 }
 
-async function main(): Promise<number> {
-  const { values, positionals } = parseCli(Deno.args, {
+/** The command line, checked: what one run of the script does. */
+interface RunOptions {
+  readonly format: Format;
+  readonly positionals: readonly string[];
+  readonly draws: number;
+  readonly seed: number;
+  readonly jobs: number;
+  readonly registryHash: string | undefined;
+  readonly readings: string | undefined;
+  readonly out: string | undefined;
+  readonly quiet: boolean;
+  /** --monte-carlo (true), --no-monte-carlo (false), or neither (undefined). */
+  readonly monteCarlo: boolean | undefined;
+}
+
+/** Read and check the options (in the order the messages have always come). */
+function parseOptions(args: string[]): RunOptions {
+  const { values, positionals } = parseCli(args, {
     format: { type: "string" },
     out: { type: "string" },
     "monte-carlo": { type: "boolean" },
@@ -257,16 +273,22 @@ async function main(): Promise<number> {
     }
     return n;
   };
-  const draws = intOpt("draws", 100_000, 1000, 10_000_000);
-  const seed = intOpt("seed", 1, 0, 2 ** 31 - 1);
-  const jobs = intOpt("jobs", Math.max(1, navigator.hardwareConcurrency || 1), 1, 256);
-  const reg = defaultRegistry();
-  const pin = values["registry-hash"] as string | undefined;
-  if (pin !== undefined && pin !== reg.hash) {
-    throw new InputError("--registry-hash", pin, `the loaded reference data's hash ${reg.hash}`);
-  }
+  return {
+    format,
+    positionals,
+    draws: intOpt("draws", 100_000, 1000, 10_000_000),
+    seed: intOpt("seed", 1, 0, 2 ** 31 - 1),
+    jobs: intOpt("jobs", Math.max(1, navigator.hardwareConcurrency || 1), 1, 256),
+    registryHash: values["registry-hash"] as string | undefined,
+    readings: values.readings as string | undefined,
+    out: values.out as string | undefined,
+    quiet: Boolean(values.quiet),
+    monteCarlo: values["no-monte-carlo"] ? false : values["monte-carlo"] ? true : undefined,
+  };
+}
 
-  // collect the sources
+/** The site files, folders and CSV files named on the command line, folders expanded. */
+async function collectSources(positionals: readonly string[]): Promise<Source[]> {
   const sources: Source[] = [];
   for (const p of positionals) {
     let info: Deno.FileInfo;
@@ -289,124 +311,156 @@ async function main(): Promise<number> {
       "a folder holding .yaml, .yml or .json site files",
     );
   }
+  return sources;
+}
 
-  // reconciliation mode
-  if (values.readings !== undefined) {
-    if (sources.length !== 1 || sources[0].kind !== "file") {
-      throw new InputError("--readings", "with several sites", "exactly one site file");
-    }
-    const site = await readSiteFile(sources[0].path);
-    const readings = await readReadings(values.readings as string);
-    const r = reconcile(site, readings, { registry: reg });
-    const { RECONCILE_FORMATS, reconcileReport } = await import(
-      "../lib/report/reconcile_report.ts"
+/** Reconciliation mode: one site and the readings taken on it. */
+async function reconcileRun(
+  sources: readonly Source[],
+  opts: RunOptions,
+  reg: Registry,
+): Promise<number> {
+  if (sources.length !== 1 || sources[0].kind !== "file") {
+    throw new InputError("--readings", "with several sites", "exactly one site file");
+  }
+  const site = await readSiteFile(sources[0].path);
+  const readings = await readReadings(opts.readings!);
+  const r = reconcile(site, readings, { registry: reg });
+  const { RECONCILE_FORMATS, reconcileReport } = await import(
+    "../lib/report/reconcile_report.ts"
+  );
+  const format = opts.format;
+  if (!(RECONCILE_FORMATS as readonly string[]).includes(format)) {
+    throw new InputError("--format", format, `with --readings: ${RECONCILE_FORMATS.join(", ")}`);
+  }
+  const text = reconcileReport(r, format as typeof RECONCILE_FORMATS[number]);
+  if (opts.out) await writeAtomic(opts.out, text);
+  else await writeStdout(text);
+  return 0;
+}
+
+/** One summary entry: a planned site's row and report link, or a refusal. */
+type SummaryEntry = { row: (string | number)[]; href: string } | {
+  id: string;
+  name: string;
+  error: string;
+};
+
+/**
+ * The outcomes of a run, in input order: the summary, the refusals and the worst exit code, the
+ * report of each site written as it comes, and the progress lines.
+ */
+class Outcomes {
+  readonly summary: SummaryEntry[] = [];
+  refused = 0;
+  worstCode = 0;
+  count = 0;
+  readonly started = performance.now();
+  #lastProgress = this.started;
+  readonly #usedNames = new Set<string>();
+
+  constructor(
+    readonly format: Format,
+    readonly out: string | undefined,
+    readonly outIsDir: boolean,
+    readonly quiet: boolean,
+    readonly single: boolean,
+  ) {}
+
+  /** A progress line on standard error, at most once a second (never for one site). */
+  progress(total: number | undefined) {
+    const now = performance.now();
+    if (this.quiet || this.single || now - this.#lastProgress < 1000) return;
+    this.#lastProgress = now;
+    console.error(
+      `planned ${this.count}${total ? `/${total}` : ""} sites (${this.refused} refused)`,
     );
-    if (!(RECONCILE_FORMATS as readonly string[]).includes(format)) {
-      throw new InputError("--format", format, `with --readings: ${RECONCILE_FORMATS.join(", ")}`);
-    }
-    const text = reconcileReport(r, format as typeof RECONCILE_FORMATS[number]);
-    if (values.out) await writeAtomic(values.out as string, text);
-    else await writeStdout(text);
-    return 0;
   }
 
-  const single = sources.length === 1 && sources[0].kind === "file";
-  const mcOn = values["no-monte-carlo"] ? false : values["monte-carlo"] ? true : single;
-  const out = values.out as string | undefined;
-  const outIsFile = out !== undefined && single && format !== "html" && /\.[a-z]+$/i.test(out);
-  const outIsDir = out !== undefined && !outIsFile;
-  const quiet = Boolean(values.quiet);
-
-  const summary:
-    ({ row: (string | number)[]; href: string } | { id: string; name: string; error: string })[] =
-      [];
-  let refused = 0;
-  let worstCode = 0;
-  let count = 0;
-  const started = performance.now();
-  let lastProgress = started;
-  const usedNames = new Set<string>();
-  const progress = (total: number | undefined) => {
-    const now = performance.now();
-    if (quiet || single || now - lastProgress < 1000) return;
-    lastProgress = now;
-    console.error(`planned ${count}${total ? `/${total}` : ""} sites (${refused} refused)`);
-  };
-
-  const jobOptions: JobOptions = {
-    monteCarlo: mcOn ? { draws, seed } : false,
-    format,
-    outIsDir,
-  };
-
   /** Report one site's outcome; called in input order whatever thread planned it. */
-  async function finish(item: Item, result: JobResult | undefined) {
-    count++;
+  async finish(item: Item, result: JobResult | undefined) {
+    this.count++;
     const { site, label, error } = item;
     if (error || !site || !result) {
-      refused++;
-      worstCode = Math.max(worstCode, error?.exitCode ?? 2);
+      this.refused++;
+      this.worstCode = Math.max(this.worstCode, error?.exitCode ?? 2);
       const msg = error?.message ?? "refused";
       console.error(
         error instanceof RowError || msg.startsWith(label)
           ? `error: ${msg}`
           : `error: ${label}: ${msg}`,
       );
-      summary.push({ id: label, name: label, error: error?.message ?? "refused" });
+      this.summary.push({ id: label, name: label, error: error?.message ?? "refused" });
       return;
     }
     if (!result.ok) {
-      refused++;
-      worstCode = Math.max(worstCode, result.exitCode);
+      this.refused++;
+      this.worstCode = Math.max(this.worstCode, result.exitCode);
       console.error(
         `error: ${site.source.file}${
           site.source.row ? ` row ${site.source.row}` : ""
         }: ${result.message}`,
       );
-      summary.push({ id: site.id ?? label, name: site.name, error: result.message });
+      this.summary.push({ id: site.id ?? label, name: site.name, error: result.message });
       return;
     }
     let base = safeName(site.id ?? site.name);
-    while (usedNames.has(base)) base += "-x";
-    usedNames.add(base);
+    while (this.#usedNames.has(base)) base += "-x";
+    this.#usedNames.add(base);
+    const format = this.format;
     const href = `${base}.${format === "csv" ? "html" : EXT[format]}`;
-    summary.push({ row: result.row, href });
+    this.summary.push({ row: result.row, href });
     if (result.text === undefined) return;
-    if (outIsDir) {
+    if (this.outIsDir) {
+      const out = this.out!;
       await writeAtomic(format === "csv" ? `${out}/${base}.html` : `${out}/${href}`, result.text);
     } else await writeStdout(result.text);
   }
+}
 
-  if (single && !outIsDir) {
-    // one site: its report as it is (no trailing newline added), no workers
-    const src = sources[0];
-    let site: SiteInput;
-    try {
-      site = await readSiteFile(src.path);
-    } catch (e) {
-      if (!(e instanceof SnellpathError)) throw e;
-      await finish({ label: src.path, error: e }, undefined);
-      return worstCode;
-    }
-    let plan;
-    try {
-      plan = planSite(site, { registry: reg, monteCarlo: jobOptions.monteCarlo });
-    } catch (e) {
-      if (!(e instanceof SnellpathError)) throw e;
-      await finish({ label: src.path, site }, {
-        ok: false,
-        message: e.message,
-        exitCode: e.exitCode,
-      });
-      return worstCode;
-    }
-    summary.push({ row: fleetRow(plan), href: "" });
-    const text = render(plan, format);
-    if (outIsFile) await writeAtomic(out!, text);
-    else await writeStdout(text);
-    return worstCode;
+/** One site to standard output or one file: its report as it is (no trailing newline added). */
+async function planSingle(
+  src: Source,
+  outcomes: Outcomes,
+  jobOptions: JobOptions,
+  reg: Registry,
+  outIsFile: boolean,
+): Promise<number> {
+  let site: SiteInput;
+  try {
+    site = await readSiteFile(src.path);
+  } catch (e) {
+    if (!(e instanceof SnellpathError)) throw e;
+    await outcomes.finish({ label: src.path, error: e }, undefined);
+    return outcomes.worstCode;
   }
+  let plan;
+  try {
+    plan = planSite(site, { registry: reg, monteCarlo: jobOptions.monteCarlo });
+  } catch (e) {
+    if (!(e instanceof SnellpathError)) throw e;
+    await outcomes.finish({ label: src.path, site }, {
+      ok: false,
+      message: e.message,
+      exitCode: e.exitCode,
+    });
+    return outcomes.worstCode;
+  }
+  outcomes.summary.push({ row: fleetRow(plan), href: "" });
+  const text = render(plan, jobOptions.format);
+  if (outIsFile) await writeAtomic(outcomes.out!, text);
+  else await writeStdout(text);
+  return outcomes.worstCode;
+}
 
+/** Plan every source in input order, on `jobs` workers (1: this thread). */
+async function planAll(
+  sources: readonly Source[],
+  outcomes: Outcomes,
+  jobOptions: JobOptions,
+  jobs: number,
+): Promise<void> {
+  const finish = (item: Item, result: JobResult | undefined) => outcomes.finish(item, result);
   const pool = jobs > 1 ? new WorkerPool(jobs, jobOptions, finish) : undefined;
   const submit = async (item: Item) => {
     if (pool && item.site && !item.error) await pool.submit(item);
@@ -426,7 +480,7 @@ async function main(): Promise<number> {
               error: new RowError(r.error.message),
             });
           }
-          progress(undefined);
+          outcomes.progress(undefined);
         }
       } else {
         try {
@@ -436,35 +490,63 @@ async function main(): Promise<number> {
           if (!(e instanceof SnellpathError)) throw e;
           await submit({ label: src.path, error: e });
         }
-        progress(sources.length);
+        outcomes.progress(sources.length);
       }
     }
     await pool?.drain();
   } finally {
     pool?.close();
   }
+}
 
-  if (!single || outIsDir) {
-    const rows = summary.map((s) => ("row" in s ? s.row : s));
-    if (outIsDir) {
-      await writeAtomic(`${out}/summary.csv`, fleetCsv(rows));
-      if (format === "html" || format === "csv") {
-        await writeAtomic(`${out}/index.html`, fleetHtml(summary, "Site plans"));
-      }
-      if (!quiet) {
-        const secs = (performance.now() - started) / 1000;
-        console.error(
-          `planned ${count - refused} of ${count} sites in ${
-            secs.toFixed(2)
-          } s; reports in ${out}/` +
-            (format === "html" || format === "csv" ? " (open index.html)" : ""),
-        );
-      }
-    } else if (format === "csv") {
-      await writeStdout(fleetCsv(rows));
+/** After a fleet: summary.csv and index.html in the folder, or the fleet CSV on standard output. */
+async function writeFleetSummary(outcomes: Outcomes): Promise<void> {
+  const { summary, format, out, outIsDir, quiet, count, refused } = outcomes;
+  const rows = summary.map((s) => ("row" in s ? s.row : s));
+  if (outIsDir) {
+    await writeAtomic(`${out}/summary.csv`, fleetCsv(rows));
+    if (format === "html" || format === "csv") {
+      await writeAtomic(`${out}/index.html`, fleetHtml(summary, "Site plans"));
     }
+    if (!quiet) {
+      const secs = (performance.now() - outcomes.started) / 1000;
+      console.error(
+        `planned ${count - refused} of ${count} sites in ${secs.toFixed(2)} s; reports in ${out}/` +
+          (format === "html" || format === "csv" ? " (open index.html)" : ""),
+      );
+    }
+  } else if (format === "csv") {
+    await writeStdout(fleetCsv(rows));
   }
-  return worstCode;
+}
+
+async function main(): Promise<number> {
+  const opts = parseOptions(Deno.args);
+  const reg = defaultRegistry();
+  const pin = opts.registryHash;
+  if (pin !== undefined && pin !== reg.hash) {
+    throw new InputError("--registry-hash", pin, `the loaded reference data's hash ${reg.hash}`);
+  }
+  const sources = await collectSources(opts.positionals);
+  if (opts.readings !== undefined) return await reconcileRun(sources, opts, reg);
+
+  const { format, out } = opts;
+  const single = sources.length === 1 && sources[0].kind === "file";
+  const mcOn = opts.monteCarlo ?? single;
+  const outIsFile = out !== undefined && single && format !== "html" && /\.[a-z]+$/i.test(out);
+  const outIsDir = out !== undefined && !outIsFile;
+  const outcomes = new Outcomes(format, out, outIsDir, opts.quiet, single);
+  const jobOptions: JobOptions = {
+    monteCarlo: mcOn ? { draws: opts.draws, seed: opts.seed } : false,
+    format,
+    outIsDir,
+  };
+  if (single && !outIsDir) {
+    return await planSingle(sources[0], outcomes, jobOptions, reg, outIsFile);
+  }
+  await planAll(sources, outcomes, jobOptions, opts.jobs);
+  await writeFleetSummary(outcomes);
+  return outcomes.worstCode;
 }
 
 async function writeStdout(text: string): Promise<void> {

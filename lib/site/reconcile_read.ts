@@ -79,7 +79,7 @@ export async function readReadingsText(text: string, where = "readings"): Promis
   }
   let raw: unknown;
   try {
-    raw = parseYaml(text, { maxAliasCount: 10, uniqueKeys: true });
+    raw = parseYaml(text, { maxAliasCount: 10 });
   } catch (e) {
     const first = (e as Error).message.split("\n")[0];
     throw new InputError(where, `text that is neither YAML nor JSON (${first})`, "a readings file");

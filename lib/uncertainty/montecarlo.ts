@@ -15,7 +15,7 @@ import {
   type UncertainInput,
 } from "./inputs.ts";
 import type { MeasurementModel } from "./gum.ts";
-import { normalOf, type RandomState, randomState, uniformOf } from "./rng.ts";
+import { fillUniformOf, type RandomState, randomState } from "./rng.ts";
 
 /** Options of {@link monteCarlo}. */
 export interface MonteCarloOptions {
@@ -55,6 +55,9 @@ export interface MonteCarloResult {
   readonly values?: Float64Array;
 }
 
+/** Uniform deviates drawn ahead per block in the draw loop. */
+const UNIFORM_BLOCK = 1024;
+
 const KIND_NORMAL = 0, KIND_RECT = 1, KIND_TRI = 2, KIND_U = 3, KIND_FIXED = 4, KIND_CORR = 5;
 
 /**
@@ -68,8 +71,8 @@ const KIND_NORMAL = 0, KIND_RECT = 1, KIND_TRI = 2, KIND_U = 3, KIND_FIXED = 4, 
  * reproducible bit for bit. Output: mean, standard deviation (divisor M − 1), and from the
  * sorted draws the probabilistically symmetric interval [y_(r), y_(r+q)], q = pM (rounded to
  * the nearest integer when pM is not one), r = (M − q)/2 (rounded up by ½ when odd), or the
- * shortest such interval. One Float64Array of M outputs and one input vector are allocated per
- * run; nothing per draw. Validity: 100 ≤ M ≤ 5·10⁷; JCGM 101 §7.2 suggests M ≥ 10⁴/(1 − p)
+ * shortest such interval. One Float64Array of M outputs, one input vector and one block of 1024
+ * uniform deviates (taken in stream order) are allocated per run; nothing per draw. Validity: 100 ≤ M ≤ 5·10⁷; JCGM 101 §7.2 suggests M ≥ 10⁴/(1 − p)
  * for a reliable interval (2·10⁵ for 95 %). Sources: jcgm-101-2008.
  *
  * @param model measurement model f(x) → y (SI), called once per draw with a reused vector
@@ -241,6 +244,35 @@ function drawAll(
 ): number {
   const { n, kind, est, scale, group, lower, z, x } = sp;
   const { words, spare } = rng;
+  // Uniform deviates are taken from a block filled ahead (the stream's own order, so the same
+  // numbers as one call per deviate); the state words stay in locals while a block is filled.
+  const block = new Float64Array(UNIFORM_BLOCK);
+  let next = UNIFORM_BLOCK;
+  const uniform = (): number => {
+    if (next === UNIFORM_BLOCK) {
+      fillUniformOf(words, block);
+      next = 0;
+    }
+    return block[next++];
+  };
+  // Marsaglia's polar method, as normalOf; the spare deviate lives in a typed array (a closure
+  // variable holding a double would be boxed on every write).
+  const normal = (): number => {
+    if (spare[1] === 1) {
+      spare[1] = 0;
+      return spare[0];
+    }
+    let u: number, v: number, q: number;
+    do {
+      u = 2 * uniform() - 1;
+      v = 2 * uniform() - 1;
+      q = u * u + v * v;
+    } while (q >= 1 || q === 0);
+    const f = Math.sqrt(-2 * Math.log(q) / q);
+    spare[0] = v * f;
+    spare[1] = 1;
+    return u * f;
+  };
   const g = group.length;
   const pi = Math.PI;
   const draws = out.length;
@@ -249,16 +281,16 @@ function drawAll(
     for (let i = 0; i < n; i++) {
       switch (kind[i]) {
         case KIND_NORMAL:
-          x[i] = est[i] + scale[i] * normalOf(words, spare);
+          x[i] = est[i] + scale[i] * normal();
           break;
         case KIND_RECT:
-          x[i] = est[i] + scale[i] * (2 * uniformOf(words) - 1);
+          x[i] = est[i] + scale[i] * (2 * uniform() - 1);
           break;
         case KIND_TRI:
-          x[i] = est[i] + scale[i] * (uniformOf(words) + uniformOf(words) - 1);
+          x[i] = est[i] + scale[i] * (uniform() + uniform() - 1);
           break;
         case KIND_U:
-          x[i] = est[i] + scale[i] * Math.cos(pi * uniformOf(words));
+          x[i] = est[i] + scale[i] * Math.cos(pi * uniform());
           break;
         case KIND_FIXED:
           x[i] = est[i];
@@ -268,7 +300,7 @@ function drawAll(
       }
     }
     if (g > 0) {
-      for (let a = 0; a < g; a++) z[a] = normalOf(words, spare);
+      for (let a = 0; a < g; a++) z[a] = normal();
       for (let a = 0; a < g; a++) {
         let s = 0;
         for (let b = 0; b <= a; b++) s += lower[a * g + b] * z[b];

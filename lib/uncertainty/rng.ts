@@ -108,6 +108,50 @@ export function nextUint32Of(w: Int32Array): number {
 }
 
 /**
+ * Fill `out` with the next `out.length` uniform deviates of a state, in stream order: the same
+ * numbers, in the same order, as that many {@link uniformOf} calls, with the state words held in
+ * local variables for the whole block (one load and one store of the state per block).
+ *
+ * @param w the state's words ({@link RandomState}`.words`, changed)
+ * @param out filled with uniform deviates in (0, 1)
+ *
+ * @example
+ * ```ts
+ * import { fillUniformOf, randomState, uniformOf } from "./rng.ts";
+ * const a = randomState(5), b = randomState(5);
+ * const block = new Float64Array(3);
+ * fillUniformOf(a.words, block);
+ * for (const u of block) if (u !== uniformOf(b.words)) throw new Error("same stream");
+ * ```
+ */
+export function fillUniformOf(w: Int32Array, out: Float64Array): void {
+  let s0 = w[0], s1 = w[1], s2 = w[2], s3 = w[3];
+  for (let k = 0; k < out.length; k++) {
+    // two xoshiro128** steps, as nextUint32Of
+    let m = Math.imul(s1, 5);
+    const hi = (Math.imul((m << 7) | (m >>> 25), 9) >>> 0) >>> 5;
+    let t2 = s2 ^ s0, t3 = s3 ^ s1;
+    s2 = t2 ^ (s1 << 9);
+    s1 = s1 ^ t2;
+    s0 = s0 ^ t3;
+    s3 = (t3 << 11) | (t3 >>> 21);
+    m = Math.imul(s1, 5);
+    const lo = (Math.imul((m << 7) | (m >>> 25), 9) >>> 0) >>> 6;
+    t2 = s2 ^ s0;
+    t3 = s3 ^ s1;
+    s2 = t2 ^ (s1 << 9);
+    s1 = s1 ^ t2;
+    s0 = s0 ^ t3;
+    s3 = (t3 << 11) | (t3 >>> 21);
+    out[k] = (hi * TWO_POW_26 + lo + 0.5) / TWO_POW_53;
+  }
+  w[0] = s0;
+  w[1] = s1;
+  w[2] = s2;
+  w[3] = s3;
+}
+
+/**
  * Next uniform deviate of a state: 53 random bits from two outputs, in the open interval (0, 1).
  *
  * @param w the state's words ({@link RandomState}`.words`, changed)
