@@ -127,7 +127,7 @@ function validateAll(files: string[], texts: string[]): DataDoc[] {
   files.forEach((file, i) => {
     let raw: unknown;
     try {
-      raw = parseYaml(texts[i], { maxAliasCount: 50 });
+      raw = parseYaml(texts[i], { maxAliasCount: 50, uniqueKeys: true });
     } catch (e) {
       const msg = e instanceof Error ? e.message.split("\n")[0] : String(e);
       throw new RegistryError(file, "(file)", "(root)", `not valid YAML: ${msg}`);

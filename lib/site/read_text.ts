@@ -81,9 +81,9 @@ function firstSentence(msg: string): string {
  */
 export async function parseYamlText(ctx: Ctx, text: string): Promise<unknown> {
   const { parseDocument } = await import("yaml");
-  // yaml 3 refuses a repeated key in a mapping always (DUPLICATE_KEY); there is no option for it.
   const doc = parseDocument(text, {
     schema: "core",
+    uniqueKeys: true,
     stringKeys: true,
     merge: false,
     resolveKnownTags: false,

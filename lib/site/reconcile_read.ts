@@ -79,7 +79,7 @@ export async function readReadingsText(text: string, where = "readings"): Promis
   }
   let raw: unknown;
   try {
-    raw = parseYaml(text, { maxAliasCount: 10 });
+    raw = parseYaml(text, { maxAliasCount: 10, uniqueKeys: true });
   } catch (e) {
     const first = (e as Error).message.split("\n")[0];
     throw new InputError(where, `text that is neither YAML nor JSON (${first})`, "a readings file");
