@@ -28,6 +28,8 @@ const DEG = 180 / Math.PI;
 /** "1 traverse", "2 traverses". */
 const traverseWord = (n: number) => `${n} traverse${n === 1 ? "" : "s"}`;
 const pct = (x: number, d = 3) => `${Number((x * 100).toPrecision(d))} %`;
+/** An expanded uncertainty as a percentage to two significant digits (JCGM 100:2008, 7.2.6). */
+const upct = (x: number) => pct(x, 2);
 const mm = (x: number, d = 4) => formatQuantity(x, "mm", d);
 
 /** Safety cautions every plan report carries, besides the plan's own. */
@@ -40,10 +42,10 @@ function verdictLine(p: SitePlan): string {
   if (!p.target) return "no target uncertainty stated";
   return p.target.reachable
     ? `target ${pct(p.target.uncertainty)} reachable here: worst expanded ${
-      pct(p.target.worstExpanded)
+      upct(p.target.worstExpanded)
     } (${p.target.worstPoint} flow)`
     : `target ${pct(p.target.uncertainty)} NOT reachable as planned: worst expanded ${
-      pct(p.target.worstExpanded)
+      upct(p.target.worstExpanded)
     } (${p.target.worstPoint} flow)`;
 }
 
@@ -271,12 +273,12 @@ export function planText(p: SitePlan): string {
     `uncertainty (${
       p.mountings.find((m) => m.traverses === p.uncertainty.mounting)?.name
     } mounting, ${p.uncertainty.operatingPoint} flow): ` +
-      `expanded ${pct(p.uncertainty.expanded)} (k = ${
+      `expanded ${upct(p.uncertainty.expanded)} (k = ${
         p.uncertainty.coverageFactor.toFixed(2)
       }, GUM)` +
       (p.uncertainty.monteCarlo
         ? `; Monte Carlo ${
-          pct(p.uncertainty.monteCarlo.expanded)
+          upct(p.uncertainty.monteCarlo.expanded)
         } (${p.uncertainty.monteCarlo.draws} draws, 95 %)`
         : ""),
   );
@@ -353,11 +355,11 @@ export function planMarkdown(p: SitePlan): string {
   }
   out.push(`\n## Uncertainty budget\n`);
   out.push(
-    `Expanded ${pct(p.uncertainty.expanded)} (k = ${
+    `Expanded ${upct(p.uncertainty.expanded)} (k = ${
       p.uncertainty.coverageFactor.toFixed(2)
     }) at ${p.uncertainty.operatingPoint} flow` +
       (p.uncertainty.monteCarlo
-        ? `; Monte Carlo ${pct(p.uncertainty.monteCarlo.expanded)}.`
+        ? `; Monte Carlo ${upct(p.uncertainty.monteCarlo.expanded)}.`
         : ".") +
       "\n",
   );
@@ -601,11 +603,11 @@ function htmlBudgetAndTrace(p: SitePlan, b: string[]): void {
   b.push(
     `<p>${
       escapeHtml(
-        `Expanded ${pct(p.uncertainty.expanded)} (k = ${
+        `Expanded ${upct(p.uncertainty.expanded)} (k = ${
           p.uncertainty.coverageFactor.toFixed(2)
         }, GUM) at ${p.uncertainty.operatingPoint} flow` + (p.uncertainty.monteCarlo
           ? `; Monte Carlo ${
-            pct(p.uncertainty.monteCarlo.expanded)
+            upct(p.uncertainty.monteCarlo.expanded)
           } from ${p.uncertainty.monteCarlo.draws} draws.`
           : "."),
       )
