@@ -29,7 +29,10 @@ const DEG = 180 / Math.PI;
 const traverseWord = (n: number) => `${n} traverse${n === 1 ? "" : "s"}`;
 const pct = (x: number, d = 3) => `${Number((x * 100).toPrecision(d))} %`;
 /** An expanded uncertainty as a percentage to two significant digits (JCGM 100:2008, 7.2.6). */
-const upct = (x: number) => pct(x, 2);
+const upct = (x: number) => {
+  const v = x * 100;
+  return `${Math.abs(v) >= 100 ? String(Math.round(v)) : v.toPrecision(2)} %`;
+};
 const mm = (x: number, d = 4) => formatQuantity(x, "mm", d);
 
 /** Safety cautions every plan report carries, besides the plan's own. */
