@@ -76,7 +76,11 @@ function cell(row: readonly (string | number)[], i: number, href: string): strin
     case COL.expanded: {
       // an uncertainty to two significant digits (GUM 7.2.6); the CSV keeps more for machines
       const x = Number(row[i]);
-      const shown = Number.isFinite(x) ? String(Number(x.toPrecision(2))) : c;
+      const shown = !Number.isFinite(x)
+        ? c
+        : Math.abs(x) >= 100
+        ? String(Math.round(x))
+        : x.toPrecision(2);
       return `<td class="num">${escapeHtml(shown)} %</td>`;
     }
     case COL.hash:
