@@ -15,6 +15,7 @@ import {
 } from "./_cli.ts";
 import { inUnitOf, parseQuantity } from "../lib/units.ts";
 import { InputError } from "../lib/errors.ts";
+import { clockPosition } from "../lib/report/card.ts";
 import { checkStraightRun, rankPositions, resolveFitting } from "../lib/installation/mod.ts";
 
 const HELP = `
@@ -176,8 +177,8 @@ runMain(() => {
       } from vertical`,
     );
     const pp = rank.recommendedPathPlane;
-    const clock = (h: number) =>
-      `${Math.floor(h) === 0 ? 12 : Math.floor(h)}:${h % 1 ? "30" : "00"}`;
+    // clock hours → the card's clock text (an hour is π/6 from the crown)
+    const clock = (h: number) => clockPosition(h * Math.PI / 6);
     console.log(
       `transducers               ${
         pp.sameSide

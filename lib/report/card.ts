@@ -9,7 +9,7 @@
  * @module
  */
 import type { SitePlan } from "../site/plan.ts";
-import { escapeHtml, formatQuantity, htmlPage, pipeDesignation } from "./format.ts";
+import { escapeHtml, formatQuantity, htmlPage } from "./format.ts";
 
 /** Safety cautions printed on every card (common practice; defers to local codes). */
 export const CARD_SAFETY: readonly string[] = Object.freeze([
@@ -191,7 +191,7 @@ export function jobCard(p: SitePlan): JobCard {
     id: p.id,
     invented: p.invented,
     registryHash: p.registryHash,
-    pipe: `${pipeDesignation(p.pipe.description)}, ${p.pipe.material}`,
+    pipe: `${p.pipe.description}, ${p.pipe.material}`,
     liquid: `${p.fluid.name} at ${formatQuantity(T, "degC", 3)}`,
     temperature: T,
     mounting: m.name,

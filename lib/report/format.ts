@@ -412,7 +412,8 @@ export function formatWithUncertainty(value: number, uncertainty: number, unit: 
  * A catalogue pipe's designation in the words of its own standard. Copper tube (ASTM B88) is
  * named by type and nominal size (`ASTM B88 type L, nominal size 3 in`), not by NPS and
  * schedule; ductile iron (AWWA C151) by nominal size and pressure class; other descriptions are
- * returned unchanged.
+ * returned unchanged. Plans now carry this form in `pipe.description` (lib/pipe `pipeDescription`);
+ * this turns the older "NPS … schedule …" form of saved plan JSON into it.
  *
  * Source: ASTM B88 (tube types K, L, M by standard size); AWWA C151 (pressure classes) —
  * naming conventions, common practice.

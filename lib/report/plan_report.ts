@@ -16,7 +16,6 @@ import {
   formatWithUncertainty,
   htmlPage,
   markdownTable,
-  pipeDesignation,
   type TableCell,
   textTable,
 } from "./format.ts";
@@ -213,9 +212,9 @@ export function planText(p: SitePlan): string {
   out.push(`registry ${p.registryHash}`);
   out.push("");
   out.push(
-    `pipe   ${pipeDesignation(p.pipe.description)}, ${p.pipe.material}: OD ${
-      mm(p.pipe.outsideDiameter)
-    }, wall ${mm(p.pipe.wallThickness, 3)}, bore ${mm(p.pipe.boreDiameter)}` +
+    `pipe   ${p.pipe.description}, ${p.pipe.material}: OD ${mm(p.pipe.outsideDiameter)}, wall ${
+      mm(p.pipe.wallThickness, 3)
+    }, bore ${mm(p.pipe.boreDiameter)}` +
       (p.pipe.lining.length
         ? `, lining ${p.pipe.lining.map((l) => `${l.material} ${mm(l.thickness, 2)}`).join(", ")}`
         : ""),
@@ -327,7 +326,7 @@ export function planMarkdown(p: SitePlan): string {
   for (const s of p.target?.suggestions ?? []) out.push(`- ${s}`);
   out.push(`\n## Pipe and liquid\n`);
   out.push(markdownTable(["quantity", "value"], [
-    ["pipe", `${pipeDesignation(p.pipe.description)}, ${p.pipe.material}`],
+    ["pipe", `${p.pipe.description}, ${p.pipe.material}`],
     ["outside diameter", mm(p.pipe.outsideDiameter)],
     ["wall thickness", mm(p.pipe.wallThickness, 3)],
     ["bore", mm(p.pipe.boreDiameter)],
@@ -474,7 +473,7 @@ function htmlHeadAndPipe(p: SitePlan, b: string[]): void {
   }
   b.push(`<h2>Pipe and liquid</h2>`);
   b.push(htmlTable(["quantity", "value"], [
-    ["pipe", `${pipeDesignation(p.pipe.description)}, ${p.pipe.material}`],
+    ["pipe", `${p.pipe.description}, ${p.pipe.material}`],
     ["outside diameter", mm(p.pipe.outsideDiameter)],
     ["wall thickness", mm(p.pipe.wallThickness, 3)],
     ["bore", mm(p.pipe.boreDiameter)],
