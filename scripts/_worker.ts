@@ -98,24 +98,26 @@ export type FromWorker =
   | { readonly kind: "result"; readonly seq: number; readonly result: JobResult }
   | { readonly kind: "crash"; readonly seq: number; readonly message: string };
 
-// Worker entry: only when this module runs as a Web Worker.
-// deno-lint-ignore no-explicit-any
-const scope = globalThis as any;
-if (typeof scope.WorkerGlobalScope === "function" && scope instanceof scope.WorkerGlobalScope) {
-  let options: JobOptions | undefined;
-  scope.onmessage = (ev: MessageEvent<ToWorker>) => {
-    const m = ev.data;
-    if (m.kind === "options") {
-      options = m.options;
-      return;
-    }
-    let reply: FromWorker;
-    try {
-      reply = { kind: "result", seq: m.seq, result: planJob(m.site, options!) };
-    } catch (e) {
-      const message = e instanceof Error ? (e.stack ?? e.message) : String(e);
-      reply = { kind: "crash", seq: m.seq, message };
-    }
-    scope.postMessage(reply);
-  };
+/**
+ * Handle one message from the main thread (the worker entry, scripts/_plan_worker.ts, hands
+ * every message here in order): options first, then sites.
+ *
+ * @param m the message
+ * @param reply where answers go
+ */
+export function handleMessage(m: ToWorker, reply: (a: FromWorker) => void): void {
+  if (m.kind === "options") {
+    workerOptions = m.options;
+    return;
+  }
+  let answer: FromWorker;
+  try {
+    answer = { kind: "result", seq: m.seq, result: planJob(m.site, workerOptions!) };
+  } catch (e) {
+    const message = e instanceof Error ? (e.stack ?? e.message) : String(e);
+    answer = { kind: "crash", seq: m.seq, message };
+  }
+  reply(answer);
 }
+
+let workerOptions: JobOptions | undefined;

@@ -127,9 +127,9 @@ interface Item {
 }
 
 /**
- * Web Workers running scripts/_worker.ts. Sites go to the least busy worker; outcomes are handed
- * to `finish` strictly in submission order (a reorder buffer), so output is the same as with one
- * thread. At most a few sites per worker are in flight (a long CSV is not read ahead).
+ * Web Workers running scripts/_plan_worker.ts (which hands messages to scripts/_worker.ts).
+ * Sites go to the least busy worker; outcomes are handed to `finish` strictly in submission
+ * order (a reorder buffer), so output is the same as with one thread. At most a few sites per worker are in flight (a long CSV is not read ahead).
  */
 class WorkerPool {
   readonly #workers: Worker[] = [];
@@ -147,7 +147,7 @@ class WorkerPool {
     readonly finish: (item: Item, result: JobResult | undefined) => Promise<void>,
   ) {
     for (let i = 0; i < n; i++) {
-      const w = new Worker(new URL("./_worker.ts", import.meta.url), { type: "module" });
+      const w = new Worker(new URL("./_plan_worker.ts", import.meta.url), { type: "module" });
       w.postMessage({ kind: "options", options } satisfies ToWorker);
       w.onmessage = (ev: MessageEvent<FromWorker>) => this.#answer(i, ev.data);
       w.onerror = (ev) => {

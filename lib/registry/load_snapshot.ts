@@ -11,7 +11,7 @@
  */
 import { RegistryError } from "../errors.ts";
 import type { SourceEntry as Source } from "./schemas/sources.ts";
-import { sha256OfText } from "./sha256.ts";
+import { sha256Hex, sha256OfText } from "./sha256.ts";
 
 /** One validated data file. */
 export interface DataDoc {
@@ -54,7 +54,7 @@ export const MAX_DATA_FILE_BYTES = 4 * 1024 * 1024;
 /** Name of the validated snapshot inside the data folder (built by `deno task registry snapshot`). */
 export const SNAPSHOT_FILE = "snapshot.json";
 /** Version of the snapshot's layout. */
-export const SNAPSHOT_VERSION = 1;
+export const SNAPSHOT_VERSION = 2;
 
 function listYaml(dir: URL, rel = ""): string[] {
   const out: string[] = [];
@@ -129,59 +129,146 @@ function deepFreeze<T>(v: T): T {
   return v;
 }
 
-/** The YAML files of a data folder, their texts and the SHA-256 over names and bytes. */
+/** The YAML files of a data folder, their bytes and the SHA-256 over names and bytes. */
 export interface DataSources {
   /** Paths relative to the folder, sorted. */
   readonly files: string[];
-  /** Their texts, in the same order. */
-  readonly texts: string[];
-  /** SHA-256 (hex) over `name \0 text \0` of every file in order. */
+  /** Their bytes, in the same order. */
+  readonly bytes: Uint8Array[];
+  /** SHA-256 (hex) over `name \0 bytes \0` of every file in order (names in UTF-8). */
   readonly rawHash: string;
+}
+
+/** What {@link readSources} read, before hashing: the files and the message to hash. */
+interface RawSources {
+  readonly files: string[];
+  readonly bytes: Uint8Array[];
+  /** `name \0 bytes \0` of every file in order. */
+  readonly message: Uint8Array<ArrayBuffer>;
+}
+
+function readRaw(dir: URL): RawSources {
+  const files = listYaml(dir);
+  const bytes: Uint8Array[] = [];
+  const enc = new TextEncoder();
+  const names = files.map((f) => enc.encode(f));
+  let total = 0;
+  for (let i = 0; i < files.length; i++) {
+    const url = new URL(files[i], dir);
+    const size = Deno.statSync(url).size;
+    if (size > MAX_DATA_FILE_BYTES) {
+      throw new RegistryError(
+        files[i],
+        "(file)",
+        "(root)",
+        `larger than ${MAX_DATA_FILE_BYTES} bytes`,
+      );
+    }
+    const b = Deno.readFileSync(url);
+    bytes.push(b);
+    total += names[i].length + b.length + 2;
+  }
+  const message = new Uint8Array(total);
+  let n = 0;
+  for (let i = 0; i < files.length; i++) {
+    message.set(names[i], n);
+    n += names[i].length + 1; // the 0 separator is already there
+    message.set(bytes[i], n);
+    n += bytes[i].length + 1;
+  }
+  return { files, bytes, message };
 }
 
 /**
  * Read the YAML files of a data folder (not demo/) and hash them.
  *
  * @param dir the data folder URL
- * @returns files, texts and their hash
+ * @returns files, bytes and their hash
  * @throws {RegistryError} for a file larger than {@link MAX_DATA_FILE_BYTES}
  */
 export function readSources(dir: URL): DataSources {
-  const files = listYaml(dir);
-  const texts: string[] = [];
-  const parts: string[] = [];
-  for (const file of files) {
-    const url = new URL(file, dir);
-    const size = Deno.statSync(url).size;
-    if (size > MAX_DATA_FILE_BYTES) {
-      throw new RegistryError(file, "(file)", "(root)", `larger than ${MAX_DATA_FILE_BYTES} bytes`);
-    }
-    const text = Deno.readTextFileSync(url);
-    texts.push(text);
-    parts.push(file, "\0", text, "\0");
-  }
-  return { files, texts, rawHash: sha256OfText(parts) };
+  const { files, bytes, message } = readRaw(dir);
+  return { files, bytes, rawHash: sha256Hex(message) };
 }
 
-// deno-lint-ignore no-explicit-any
-function readSnapshot(dir: URL, rawHash: string): any | undefined {
-  let text: string;
+/**
+ * The texts of the files read (UTF-8; invalid sequences become U+FFFD, a leading byte-order mark
+ * is dropped), for full validation.
+ *
+ * @param read what {@link readSources} read
+ * @returns the texts, in file order
+ */
+export function sourceTexts(read: DataSources): string[] {
+  const dec = new TextDecoder();
+  return read.bytes.map((b) => dec.decode(b));
+}
+
+/** A snapshot whose recorded YAML hash matched: its content text and that text's SHA-256. */
+interface SnapshotContent {
+  /** The canonical JSON of `[file, data]` pairs, as stored. */
+  readonly content: string;
+  /** SHA-256 (hex) of `content`: the registry's content hash. */
+  readonly hash: string;
+}
+
+/**
+ * The head of a snapshot: layout version, SHA-256 of the YAML bytes, content hash; the canonical
+ * content follows, then `}` and a newline.
+ */
+const SNAPSHOT_HEAD =
+  /^\{"version":(\d+),"rawHash":"([0-9a-f]{64})","hash":"([0-9a-f]{64})","content":/;
+
+/**
+ * Split a snapshot text whose recorded YAML hash is `rawHash` into its content; undefined when
+ * it is of another layout or version, records another YAML hash, or is cut short.
+ */
+function snapshotParts(
+  text: string,
+  rawHash: string,
+): { content: string; recorded: string } | undefined {
+  const m = SNAPSHOT_HEAD.exec(text.slice(0, 200));
+  if (!m || Number(m[1]) !== SNAPSHOT_VERSION || m[2] !== rawHash) return undefined;
+  const end = text.endsWith("}\n") ? text.length - 2 : text.endsWith("}") ? text.length - 1 : -1;
+  if (end <= m[0].length) return undefined;
+  return { content: text.slice(m[0].length, end), recorded: m[3] };
+}
+
+function readSnapshotText(dir: URL): string | undefined {
   try {
-    text = Deno.readTextFileSync(new URL(SNAPSHOT_FILE, dir));
+    return Deno.readTextFileSync(new URL(SNAPSHOT_FILE, dir));
   } catch {
     return undefined;
   }
+}
+
+function readSnapshot(dir: URL, rawHash: string): SnapshotContent | undefined {
+  const text = readSnapshotText(dir);
+  const parts = text === undefined ? undefined : snapshotParts(text, rawHash);
+  if (!parts) return undefined;
+  const hash = sha256OfText([parts.content]);
+  // A content that is not what its head records (edited by hand, damaged): not used.
+  return hash === parts.recorded ? { content: parts.content, hash } : undefined;
+}
+
+/** The documents of a snapshot's content; undefined when it is not the expected shape. */
+function snapshotDocs(content: string): DataDoc[] | undefined {
+  let pairs: unknown;
   try {
-    const snap = JSON.parse(text);
-    if (
-      snap?.version === SNAPSHOT_VERSION && snap.rawHash === rawHash && Array.isArray(snap.docs)
-    ) {
-      return snap;
-    }
+    pairs = JSON.parse(content);
   } catch {
-    // a broken snapshot is ignored: full validation follows
+    return undefined;
   }
-  return undefined;
+  if (!Array.isArray(pairs)) return undefined;
+  const docs: DataDoc[] = [];
+  for (const p of pairs) {
+    if (!Array.isArray(p) || p.length !== 2 || typeof p[0] !== "string") return undefined;
+    const data = p[1];
+    if (data === null || typeof data !== "object" || typeof data.kind !== "string") {
+      return undefined;
+    }
+    docs.push({ file: p[0], kind: data.kind, data });
+  }
+  return docs;
 }
 
 /**
@@ -251,6 +338,23 @@ function needFull(): FullValidation {
   );
 }
 
+/** What a first look at a data folder found, kept for the next load of the same folder. */
+interface Primed {
+  readonly href: string;
+  readonly read: DataSources;
+  /** The fresh snapshot's content, or undefined when it is stale, absent or damaged. */
+  readonly snap: SnapshotContent | undefined;
+}
+
+/** What {@link snapshotFresh} or {@link primeSnapshot} found (used once, by the next load). */
+let primed: Primed | undefined;
+
+function takePrimed(base: URL): Primed | undefined {
+  const p = primed;
+  primed = undefined;
+  return p?.href === base.href ? p : undefined;
+}
+
 /**
  * Whether a data folder's snapshot was built from exactly its YAML bytes (the quick path).
  *
@@ -260,17 +364,47 @@ function needFull(): FullValidation {
 export function snapshotFresh(dir: string | URL): boolean {
   const base = toDirUrl(dir);
   const read = readSources(base);
-  primed = { href: base.href, read };
-  return readSnapshot(base, read.rawHash) !== undefined;
+  const snap = readSnapshot(base, read.rawHash);
+  primed = { href: base.href, read, snap };
+  return snap !== undefined;
 }
 
-/** What {@link snapshotFresh} read, kept for the next load of the same folder (used once). */
-let primed: { href: string; read: DataSources } | undefined;
+async function sha256Native(data: Uint8Array<ArrayBuffer>): Promise<string> {
+  const d = new Uint8Array(await crypto.subtle.digest("SHA-256", data));
+  let s = "";
+  for (let i = 0; i < d.length; i++) s += d[i].toString(16).padStart(2, "0");
+  return s;
+}
 
-function sourcesOf(base: URL): DataSources {
-  const p = primed;
-  primed = undefined;
-  return p?.href === base.href ? p.read : readSources(base);
+/**
+ * {@link snapshotFresh}, hashing with the Web Crypto API (native SHA-256, the same digests): the
+ * default registry is primed this way when `lib/registry/mod.ts` is first imported, so that the
+ * synchronous first load only parses the snapshot.
+ *
+ * @param dir the data folder (path or file URL)
+ * @returns true when the next {@link loadRegistry} of that folder will use the snapshot
+ *
+ * @example
+ * ```ts
+ * import { loadRegistry, primeSnapshot } from "./load_snapshot.ts";
+ * const dir = new URL("../../data/", import.meta.url);
+ * if (!(await primeSnapshot(dir))) throw new Error("stale snapshot");
+ * if (!loadRegistry(dir).fromSnapshot) throw new Error("snapshot not used");
+ * ```
+ */
+export async function primeSnapshot(dir: string | URL): Promise<boolean> {
+  const base = toDirUrl(dir);
+  const { files, bytes, message } = readRaw(base);
+  const read: DataSources = { files, bytes, rawHash: await sha256Native(message) };
+  const text = readSnapshotText(base);
+  const parts = text === undefined ? undefined : snapshotParts(text, read.rawHash);
+  let snap: SnapshotContent | undefined;
+  if (parts) {
+    const hash = await sha256Native(new TextEncoder().encode(parts.content));
+    if (hash === parts.recorded) snap = { content: parts.content, hash };
+  }
+  primed = { href: base.href, read, snap };
+  return snap !== undefined;
 }
 
 /**
@@ -305,18 +439,25 @@ function sourcesOf(base: URL): DataSources {
  */
 export function loadRegistry(dir: string | URL, options?: LoadOptions): LoadedRegistry {
   const base = toDirUrl(dir);
-  const { files, texts, rawHash } = sourcesOf(base);
-  const snap = options?.snapshot === false ? undefined : readSnapshot(base, rawHash);
-  const docs: DataDoc[] = snap ? snap.docs : needFull()(files, texts);
+  const p = takePrimed(base);
+  const read = p?.read ?? readSources(base);
+  const snap = options?.snapshot === false
+    ? undefined
+    : p
+    ? p.snap
+    : readSnapshot(base, read.rawHash);
+  const fromSnap = snap ? snapshotDocs(snap.content) : undefined;
+  const docs: DataDoc[] = fromSnap ?? needFull()(read.files, sourceTexts(read));
   const sources = collectSources(docs);
-  const hash = contentHash(docs);
+  // From the snapshot, the hash is that of the very text the documents were parsed from.
+  const hash = fromSnap ? snap!.hash : contentHash(docs);
   for (const d of docs) deepFreeze(d.data);
   return Object.freeze({
     dir: base.href,
     docs: Object.freeze(docs),
     sources,
     hash,
-    fromSnapshot: snap !== undefined,
+    fromSnapshot: fromSnap !== undefined,
   });
 }
 
@@ -360,8 +501,10 @@ export async function loadRegistryAsync(
  */
 export function buildSnapshot(dir: string | URL): string {
   const base = toDirUrl(dir);
-  const { files, texts, rawHash } = readSources(base);
-  const docs = needFull()(files, texts);
-  return JSON.stringify({ version: SNAPSHOT_VERSION, rawHash, hash: contentHash(docs), docs }) +
-    "\n";
+  const read = readSources(base);
+  const docs = needFull()(read.files, sourceTexts(read));
+  const content = canonicalJson(docs.map((d) => [d.file, d.data]));
+  const hash = sha256OfText([content]);
+  return `{"version":${SNAPSHOT_VERSION},"rawHash":"${read.rawHash}","hash":"${hash}",` +
+    `"content":${content}}\n`;
 }

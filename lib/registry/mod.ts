@@ -14,7 +14,7 @@ import {
   fullValidationLoaded,
   type LoadedRegistry,
   loadRegistry,
-  snapshotFresh,
+  primeSnapshot,
 } from "./load_snapshot.ts";
 import { type CoreQueries, coreQueries } from "./core.ts";
 import { type PipeQueries, pipeQueries } from "./q_pipes.ts";
@@ -107,7 +107,7 @@ let cached: Registry | undefined;
 if (!fullValidationLoaded() && readAllowed(DATA_DIR)) {
   let fresh = false;
   try {
-    fresh = snapshotFresh(DATA_DIR);
+    fresh = await primeSnapshot(DATA_DIR);
   } catch {
     // an unreadable data folder: the first load reports it
   }

@@ -253,19 +253,27 @@ export interface MaterialQueries {
  * ```
  */
 export function materialQueries(loaded: LoadedRegistry): MaterialQueries {
-  const byId = new Map<string, MaterialProperties>();
+  // Entries are turned into SI properties on first use (a plan asks for three or four of them).
+  const entries = new Map<string, MaterialEntry>();
   for (const d of loaded.docs) {
     if (d.kind !== "materials") continue;
-    for (const m of d.data.materials as MaterialEntry[]) byId.set(m.id, toProperties(m));
+    for (const m of d.data.materials as MaterialEntry[]) entries.set(m.id, m);
   }
-  const all = Object.freeze([...byId.values()]);
+  const byId = new Map<string, MaterialProperties>();
+  const propertiesOf = (id: string): MaterialProperties | undefined => {
+    let p = byId.get(id);
+    if (p === undefined) {
+      const m = entries.get(id);
+      if (m === undefined) return undefined;
+      p = toProperties(m);
+      byId.set(id, p);
+    }
+    return p;
+  };
+  let all: readonly MaterialProperties[] | undefined;
+  const everyMaterial = () =>
+    all ??= Object.freeze([...entries.keys()].map((id) => propertiesOf(id)!));
   const byRole = new Map<string, readonly MaterialProperties[]>();
-  for (const r of ROLES) {
-    byRole.set(
-      r,
-      Object.freeze(all.filter((m) => m.roles.includes(r as MaterialRole))),
-    );
-  }
 
   /**
    * A material by id, in SI units with its trace.
@@ -279,8 +287,8 @@ export function materialQueries(loaded: LoadedRegistry): MaterialQueries {
    * @throws {NotFoundError} naming the nearest ids when there is no such material
    */
   function material(id: string): MaterialProperties {
-    const m = byId.get(id);
-    if (!m) throw new NotFoundError("material", id, nearest(String(id), [...byId.keys()], 3));
+    const m = typeof id === "string" ? propertiesOf(id) : undefined;
+    if (!m) throw new NotFoundError("material", id, nearest(String(id), [...entries.keys()], 3));
     return m;
   }
 
@@ -293,9 +301,15 @@ export function materialQueries(loaded: LoadedRegistry): MaterialQueries {
    */
   function materials(options?: { role?: MaterialRole }): readonly MaterialProperties[] {
     const role = options?.role;
-    if (role === undefined) return all;
-    const list = byRole.get(role);
-    if (!list) throw new InputError("role", JSON.stringify(role), "one of: wall, lining, wedge");
+    if (role === undefined) return everyMaterial();
+    if (!ROLES.includes(role)) {
+      throw new InputError("role", JSON.stringify(role), "one of: wall, lining, wedge");
+    }
+    let list = byRole.get(role);
+    if (!list) {
+      list = Object.freeze(everyMaterial().filter((m) => m.roles.includes(role)));
+      byRole.set(role, list);
+    }
     return list;
   }
 

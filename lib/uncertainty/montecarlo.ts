@@ -180,14 +180,10 @@ export function monteCarlo(
   const r = (draws - q) % 2 === 0 ? (draws - q) / 2 : (draws - q + 1) / 2;
   const fullSort = options.shortest === true || options.keepValues === true;
   if (fullSort) out.sort();
-  else {
-    // Only two order statistics are needed: select them (linear time) instead of sorting.
-    selectInPlace(out, r - 1, 0, draws - 1);
-    selectInPlace(out, r - 1 + q, r, draws - 1);
-  }
+  // Only two order statistics are needed: found without sorting every draw.
   const symmetric: [number, number] = fullSort
     ? [out[r - 1], out[r - 1 + q]]
-    : [signedZeroAt(out, r - 1), signedZeroAt(out, r - 1 + q)];
+    : orderStatistics(out, r - 1, r - 1 + q);
   let interval: [number, number] = symmetric;
   if (options.shortest) {
     let best = 0, width = Infinity;
@@ -230,10 +226,14 @@ interface Sampler {
 }
 
 /**
- * Draw every input vector, evaluate the model and store the outputs (a small function of its
- * own, so that the optimising compiler, which compiles it while it runs, compiles only the loop).
+ * Draw every input M times in draw order and evaluate the model (JCGM 101:2008 §6.4 for the
+ * distributions; normal deviates by Marsaglia's polar method, as `normalOf`). Uniform deviates
+ * come from a block filled ahead in the stream's own order, so the numbers are those of one
+ * `uniformOf` call per deviate. Everything lives in this one function's locals (no closures):
+ * the optimising compiler then compiles the whole loop early in the first call, which a cold
+ * one-site plan depends on.
  *
- * @returns the sum of the outputs in draw order
+ * @returns the sum of the outputs, in draw order
  */
 function drawAll(
   model: MeasurementModel,
@@ -244,69 +244,72 @@ function drawAll(
 ): number {
   const { n, kind, est, scale, group, lower, z, x } = sp;
   const { words, spare } = rng;
-  // Uniform deviates are taken from a block filled ahead (the stream's own order, so the same
-  // numbers as one call per deviate); the state words stay in locals while a block is filled.
   const block = new Float64Array(UNIFORM_BLOCK);
   let next = UNIFORM_BLOCK;
-  const uniform = (): number => {
-    if (next === UNIFORM_BLOCK) {
-      fillUniformOf(words, block);
-      next = 0;
-    }
-    return block[next++];
-  };
-  // Marsaglia's polar method, as normalOf; the spare deviate lives in a typed array (a closure
-  // variable holding a double would be boxed on every write).
-  const normal = (): number => {
-    if (spare[1] === 1) {
-      spare[1] = 0;
-      return spare[0];
-    }
-    let u: number, v: number, q: number;
-    do {
-      u = 2 * uniform() - 1;
-      v = 2 * uniform() - 1;
-      q = u * u + v * v;
-    } while (q >= 1 || q === 0);
-    const f = Math.sqrt(-2 * Math.log(q) / q);
-    spare[0] = v * f;
-    spare[1] = 1;
-    return u * f;
-  };
+  let hasSpare = spare[1] === 1;
+  let spareValue = spare[0];
   const g = group.length;
   const pi = Math.PI;
   const draws = out.length;
   let sum = 0;
   for (let m = 0; m < draws; m++) {
-    for (let i = 0; i < n; i++) {
-      switch (kind[i]) {
-        case KIND_NORMAL:
-          x[i] = est[i] + scale[i] * normal();
-          break;
-        case KIND_RECT:
-          x[i] = est[i] + scale[i] * (2 * uniform() - 1);
-          break;
-        case KIND_TRI:
-          x[i] = est[i] + scale[i] * (uniform() + uniform() - 1);
-          break;
-        case KIND_U:
-          x[i] = est[i] + scale[i] * Math.cos(pi * uniform());
-          break;
-        case KIND_FIXED:
-          x[i] = est[i];
-          break;
-        default:
-          break; // correlated: below
+    for (let i = 0; i < n + g; i++) {
+      // i < n: input i by its own kind; n ≤ i < n + g: the correlated group's deviate i − n
+      const k = i < n ? kind[i] : KIND_NORMAL;
+      if (k === KIND_FIXED) {
+        x[i] = est[i];
+        continue;
       }
+      if (k === KIND_CORR) continue;
+      let e: number; // the deviate: standard normal, or in [−1, 1] for the bounded kinds
+      if (k === KIND_NORMAL) {
+        if (hasSpare) {
+          hasSpare = false;
+          e = spareValue;
+        } else {
+          let u: number, v: number, q: number;
+          do {
+            if (next === UNIFORM_BLOCK) {
+              fillUniformOf(words, block);
+              next = 0;
+            }
+            u = 2 * block[next++] - 1;
+            if (next === UNIFORM_BLOCK) {
+              fillUniformOf(words, block);
+              next = 0;
+            }
+            v = 2 * block[next++] - 1;
+            q = u * u + v * v;
+          } while (q >= 1 || q === 0);
+          const f = Math.sqrt(-2 * Math.log(q) / q);
+          spareValue = v * f;
+          hasSpare = true;
+          e = u * f;
+        }
+      } else {
+        if (next === UNIFORM_BLOCK) {
+          fillUniformOf(words, block);
+          next = 0;
+        }
+        const u1 = block[next++];
+        if (k === KIND_RECT) e = 2 * u1 - 1;
+        else if (k === KIND_U) e = Math.cos(pi * u1);
+        else {
+          if (next === UNIFORM_BLOCK) {
+            fillUniformOf(words, block);
+            next = 0;
+          }
+          e = u1 + block[next++] - 1; // triangular
+        }
+      }
+      if (i < n) x[i] = est[i] + scale[i] * e;
+      else z[i - n] = e;
     }
-    if (g > 0) {
-      for (let a = 0; a < g; a++) z[a] = normal();
-      for (let a = 0; a < g; a++) {
-        let s = 0;
-        for (let b = 0; b <= a; b++) s += lower[a * g + b] * z[b];
-        const i = group[a];
-        x[i] = est[i] + scale[i] * s;
-      }
+    for (let a = 0; a < g; a++) {
+      let s = 0;
+      for (let b = 0; b <= a; b++) s += lower[a * g + b] * z[b];
+      const i = group[a];
+      x[i] = est[i] + scale[i] * s;
     }
     const y = model(x);
     if (!Number.isFinite(y)) {
@@ -319,6 +322,8 @@ function drawAll(
     out[m] = y;
     sum += y;
   }
+  spare[0] = spareValue;
+  spare[1] = hasSpare ? 1 : 0;
   return sum;
 }
 
@@ -330,6 +335,71 @@ function sumOfSquares(out: Float64Array, mean: number): number {
     ss += d * d;
   }
   return ss;
+}
+
+/** Draws in the sample that brackets an order statistic ({@link orderStatistics}). */
+const BRACKET_SAMPLE = 1024;
+
+/**
+ * The values a full ascending sort of `a` (as `Float64Array#sort`: −0 before +0) would put at
+ * indices `k1 ≤ k2`, without sorting all of `a` (which may be rearranged).
+ *
+ * Method: a strided sample of {@link BRACKET_SAMPLE} values is sorted, and for each k the sample
+ * values about k/n ± 3 binomial standard deviations bracket it; one pass counts the values below
+ * each bracket and gathers those inside; when k falls inside its bracket, the gathered values are
+ * sorted and k read off. Exact whatever the data: when a bracket misses (unlikely for random
+ * draws, possible for ordered ones) or gathers too much, it falls back to selection
+ * ({@link selectInPlace}). Cost: one pass and two sorts of a few per cent of the values.
+ */
+function orderStatistics(a: Float64Array, k1: number, k2: number): [number, number] {
+  const n = a.length;
+  if (n >= 4 * BRACKET_SAMPLE) {
+    const found = bracketed(a, k1, k2);
+    if (found) return found;
+  }
+  selectInPlace(a, k1, 0, n - 1);
+  selectInPlace(a, k2, k1 + 1 <= k2 ? k1 + 1 : k1, n - 1);
+  return [signedZeroAt(a, k1), signedZeroAt(a, k2)];
+}
+
+function bracketOf(sample: Float64Array, n: number, k: number): [number, number] {
+  const S = sample.length;
+  const p = k / n;
+  const c = p * S;
+  const d = Math.ceil(3 * Math.sqrt(S * p * (1 - p))) + 2;
+  const lo = Math.floor(c - d), hi = Math.ceil(c + d);
+  return [lo < 0 ? -Infinity : sample[lo], hi >= S ? Infinity : sample[hi]];
+}
+
+function bracketed(a: Float64Array, k1: number, k2: number): [number, number] | undefined {
+  const n = a.length;
+  const S = BRACKET_SAMPLE;
+  const stride = Math.floor(n / S);
+  const sample = new Float64Array(S);
+  for (let j = 0; j < S; j++) sample[j] = a[j * stride];
+  sample.sort();
+  const [lo1, hi1] = bracketOf(sample, n, k1);
+  const [lo2, hi2] = bracketOf(sample, n, k2);
+  // Room for 4× the expected share of each bracket; more means the sample misled: fall back.
+  const cap = Math.min(n, 4 * Math.ceil(n * (6 * Math.sqrt(S) / S + 8 / S)) + 64);
+  const buf1 = new Float64Array(cap), buf2 = new Float64Array(cap);
+  let below1 = 0, below2 = 0, c1 = 0, c2 = 0;
+  for (let m = 0; m < n; m++) {
+    const x = a[m];
+    if (x < lo1) below1++;
+    else if (x <= hi1) {
+      if (c1 === cap) return undefined;
+      buf1[c1++] = x;
+    }
+    if (x < lo2) below2++;
+    else if (x <= hi2) {
+      if (c2 === cap) return undefined;
+      buf2[c2++] = x;
+    }
+  }
+  if (k1 < below1 || k1 >= below1 + c1 || k2 < below2 || k2 >= below2 + c2) return undefined;
+  const s1 = buf1.subarray(0, c1).sort(), s2 = buf2.subarray(0, c2).sort();
+  return [s1[k1 - below1], s2[k2 - below2]];
 }
 
 /**
