@@ -11,12 +11,12 @@ import type { FromWorker, ToWorker } from "./_worker.ts";
 // deno-lint-ignore no-explicit-any
 const scope = globalThis as any;
 const queued: ToWorker[] = [];
-let handle: ((m: ToWorker) => void) | undefined;
+const ready: { handle?: (m: ToWorker) => void } = {};
 scope.onmessage = (ev: MessageEvent<ToWorker>) => {
-  if (handle) handle(ev.data);
+  if (ready.handle) ready.handle(ev.data);
   else queued.push(ev.data);
 };
 const { handleMessage } = await import("./_worker.ts");
 const reply = (a: FromWorker) => scope.postMessage(a);
-handle = (m) => handleMessage(m, reply);
-for (const m of queued.splice(0)) handle(m);
+ready.handle = (m) => handleMessage(m, reply);
+for (const m of queued.splice(0)) ready.handle(m);
