@@ -189,6 +189,57 @@ function amp(c: { amplitude: number; decay: number }, x: number): number {
  * ```
  */
 export function profileErrorEstimate(input: ProfileErrorInput): ProfileErrorResult {
+  const error = profileError(input);
+  // profileError left its fitting, inputs and factor in last*, its path means in MEMO
+  const fit = lastFit!, k = lastK, comp = MEMO;
+  const components: ErrorComponents = Object.freeze({
+    axisymmetric: k * comp[0],
+    secondHarmonic: k * comp[1],
+    skew: k * comp[2],
+    swirl: k * comp[3],
+    crossFlow: k * comp[4],
+  });
+  if (fit !== provFit) {
+    provLast = modelProvenance(fit);
+    provFit = fit;
+  }
+  const prov = provLast!;
+  return Object.freeze({
+    error,
+    spread: prov.relativeSpread * Math.abs(error),
+    source: prov.source,
+    basis: prov.basis,
+    components,
+    profileFactor: k,
+    fitting: fit.id,
+    distanceDiameters: lastX0,
+    orientation: lastAlpha,
+    traverses: lastTrav,
+    reynolds: lastRe,
+    note: MODEL_NOTE,
+  });
+}
+
+// What the last profileError resolved: its fitting, inputs and fully developed factor.
+let lastFit: Fitting | undefined;
+let lastX0 = NaN, lastAlpha = NaN, lastTrav = NaN, lastRe = NaN, lastK = NaN;
+
+/**
+ * The `error` of {@link profileErrorEstimate} alone, with the same checks and errors and the
+ * same number, without building the result (components, spread, provenance): for rankings and
+ * sweeps that read the error only.
+ *
+ * @param input as {@link profileErrorEstimate}
+ * @returns estimated relative error of the reading (reading/true − 1)
+ *
+ * @example
+ * ```ts
+ * import { profileError, profileErrorEstimate } from "./model.ts";
+ * const input = { distanceDiameters: 5, fitting: "elbow-90", orientation: 0.4 };
+ * if (profileError(input) !== profileErrorEstimate(input).error) throw new Error();
+ * ```
+ */
+export function profileError(input: ProfileErrorInput): number {
   const fit = resolveFitting(input.fitting);
   const x0 = requireFinite("distanceDiameters", input.distanceDiameters, "D");
   if (x0 < 0) {
@@ -207,42 +258,54 @@ export function profileErrorEstimate(input: ProfileErrorInput): ProfileErrorResu
   if (!(phi > 0 && phi < 1.4) || !Number.isFinite(1 / Math.tan(phi))) {
     throw new InputError("fluidAngle", String(phi), "a beam angle in the liquid in (0, 1.4) rad");
   }
-  const shape: ProfileShape = profileShape(re, {
-    model: input.model,
-    relativeRoughness: input.relativeRoughness,
-    extrapolate: true,
-  });
-  const k = 1 / chordMeanVelocity(shape, h);
+  const k = developedFactor(re, input.model, input.relativeRoughness, h);
   const comp = memoPathIntegral(fit, x0, alpha, nTrav, h, phi);
-  const components: ErrorComponents = Object.freeze({
-    axisymmetric: k * comp[0],
-    secondHarmonic: k * comp[1],
-    skew: k * comp[2],
-    swirl: k * comp[3],
-    crossFlow: k * comp[4],
-  });
-  const error = components.axisymmetric + components.secondHarmonic + components.skew +
-    components.swirl + components.crossFlow;
+  // the sum of the components k·comp[i], in their order
+  const error = k * comp[0] + k * comp[1] + k * comp[2] + k * comp[3] + k * comp[4];
   if (!Number.isFinite(error)) {
     throw new NoPhysicalAnswerError(
       `the distorted-profile model gives no finite estimate at ${x0} D, beam ${phi} rad`,
     );
   }
-  const prov = modelProvenance(fit);
-  return Object.freeze({
-    error,
-    spread: prov.relativeSpread * Math.abs(error),
-    source: prov.source,
-    basis: prov.basis,
-    components,
-    profileFactor: k,
-    fitting: fit.id,
-    distanceDiameters: x0,
-    orientation: alpha,
-    traverses: nTrav,
-    reynolds: re,
-    note: MODEL_NOTE,
-  });
+  lastFit = fit;
+  lastX0 = x0;
+  lastAlpha = alpha;
+  lastTrav = nTrav;
+  lastRe = re;
+  lastK = k;
+  return error;
+}
+
+// The provenance of the last fitting estimated (rankings ask for one fitting many times).
+let provFit: Fitting | undefined;
+let provLast: ModelProvenance | undefined;
+
+// The fully developed factor k = 1 / chord mean of u/V for the last few (Re, model, ε/D, h):
+// a ranking asks for the same few Reynolds numbers at every candidate, and k depends on nothing
+// else, so each is resolved once and the same number used again.
+const K_SLOTS = 4;
+const kKeys: [number, ProfileModel | undefined, number | undefined, number][] = [];
+const kValues: number[] = [];
+let kNext = 0;
+
+function developedFactor(
+  re: number,
+  model: ProfileModel | undefined,
+  relativeRoughness: number | undefined,
+  h: number,
+): number {
+  for (let i = 0; i < kKeys.length; i++) {
+    const key = kKeys[i];
+    if (key[0] === re && key[1] === model && key[2] === relativeRoughness && key[3] === h) {
+      return kValues[i];
+    }
+  }
+  const shape: ProfileShape = profileShape(re, { model, relativeRoughness, extrapolate: true });
+  const k = 1 / chordMeanVelocity(shape, h);
+  kKeys[kNext] = [re, model, relativeRoughness, h];
+  kValues[kNext] = k;
+  kNext = (kNext + 1) % K_SLOTS;
+  return k;
 }
 
 const OUT = new Float64Array(5);
