@@ -33,6 +33,7 @@ export {
   MODEL_RELATIVE_SPREAD,
   type ModelProvenance,
   modelProvenance,
+  profileError,
   profileErrorEstimate,
   type ProfileErrorInput,
   type ProfileErrorResult,

@@ -189,6 +189,57 @@ function amp(c: { amplitude: number; decay: number }, x: number): number {
  * ```
  */
 export function profileErrorEstimate(input: ProfileErrorInput): ProfileErrorResult {
+  const error = profileError(input);
+  // profileError left its fitting, inputs and factor in last*, its path means in MEMO
+  const fit = lastFit!, k = lastK, comp = MEMO;
+  const components: ErrorComponents = Object.freeze({
+    axisymmetric: k * comp[0],
+    secondHarmonic: k * comp[1],
+    skew: k * comp[2],
+    swirl: k * comp[3],
+    crossFlow: k * comp[4],
+  });
+  if (fit !== provFit) {
+    provLast = modelProvenance(fit);
+    provFit = fit;
+  }
+  const prov = provLast!;
+  return Object.freeze({
+    error,
+    spread: prov.relativeSpread * Math.abs(error),
+    source: prov.source,
+    basis: prov.basis,
+    components,
+    profileFactor: k,
+    fitting: fit.id,
+    distanceDiameters: lastX0,
+    orientation: lastAlpha,
+    traverses: lastTrav,
+    reynolds: lastRe,
+    note: MODEL_NOTE,
+  });
+}
+
+// What the last profileError resolved: its fitting, inputs and fully developed factor.
+let lastFit: Fitting | undefined;
+let lastX0 = NaN, lastAlpha = NaN, lastTrav = NaN, lastRe = NaN, lastK = NaN;
+
+/**
+ * The `error` of {@link profileErrorEstimate} alone, with the same checks and errors and the
+ * same number, without building the result (components, spread, provenance): for rankings and
+ * sweeps that read the error only.
+ *
+ * @param input as {@link profileErrorEstimate}
+ * @returns estimated relative error of the reading (reading/true − 1)
+ *
+ * @example
+ * ```ts
+ * import { profileError, profileErrorEstimate } from "./model.ts";
+ * const input = { distanceDiameters: 5, fitting: "elbow-90", orientation: 0.4 };
+ * if (profileError(input) !== profileErrorEstimate(input).error) throw new Error();
+ * ```
+ */
+export function profileError(input: ProfileErrorInput): number {
   const fit = resolveFitting(input.fitting);
   const x0 = requireFinite("distanceDiameters", input.distanceDiameters, "D");
   if (x0 < 0) {
@@ -207,42 +258,54 @@ export function profileErrorEstimate(input: ProfileErrorInput): ProfileErrorResu
   if (!(phi > 0 && phi < 1.4) || !Number.isFinite(1 / Math.tan(phi))) {
     throw new InputError("fluidAngle", String(phi), "a beam angle in the liquid in (0, 1.4) rad");
   }
-  const shape: ProfileShape = profileShape(re, {
-    model: input.model,
-    relativeRoughness: input.relativeRoughness,
-    extrapolate: true,
-  });
-  const k = 1 / chordMeanVelocity(shape, h);
+  const k = developedFactor(re, input.model, input.relativeRoughness, h);
   const comp = memoPathIntegral(fit, x0, alpha, nTrav, h, phi);
-  const components: ErrorComponents = Object.freeze({
-    axisymmetric: k * comp[0],
-    secondHarmonic: k * comp[1],
-    skew: k * comp[2],
-    swirl: k * comp[3],
-    crossFlow: k * comp[4],
-  });
-  const error = components.axisymmetric + components.secondHarmonic + components.skew +
-    components.swirl + components.crossFlow;
+  // the sum of the components k·comp[i], in their order
+  const error = k * comp[0] + k * comp[1] + k * comp[2] + k * comp[3] + k * comp[4];
   if (!Number.isFinite(error)) {
     throw new NoPhysicalAnswerError(
       `the distorted-profile model gives no finite estimate at ${x0} D, beam ${phi} rad`,
     );
   }
-  const prov = modelProvenance(fit);
-  return Object.freeze({
-    error,
-    spread: prov.relativeSpread * Math.abs(error),
-    source: prov.source,
-    basis: prov.basis,
-    components,
-    profileFactor: k,
-    fitting: fit.id,
-    distanceDiameters: x0,
-    orientation: alpha,
-    traverses: nTrav,
-    reynolds: re,
-    note: MODEL_NOTE,
-  });
+  lastFit = fit;
+  lastX0 = x0;
+  lastAlpha = alpha;
+  lastTrav = nTrav;
+  lastRe = re;
+  lastK = k;
+  return error;
+}
+
+// The provenance of the last fitting estimated (rankings ask for one fitting many times).
+let provFit: Fitting | undefined;
+let provLast: ModelProvenance | undefined;
+
+// The fully developed factor k = 1 / chord mean of u/V for the last few (Re, model, ε/D, h):
+// a ranking asks for the same few Reynolds numbers at every candidate, and k depends on nothing
+// else, so each is resolved once and the same number used again.
+const K_SLOTS = 4;
+const kKeys: [number, ProfileModel | undefined, number | undefined, number][] = [];
+const kValues: number[] = [];
+let kNext = 0;
+
+function developedFactor(
+  re: number,
+  model: ProfileModel | undefined,
+  relativeRoughness: number | undefined,
+  h: number,
+): number {
+  for (let i = 0; i < kKeys.length; i++) {
+    const key = kKeys[i];
+    if (key[0] === re && key[1] === model && key[2] === relativeRoughness && key[3] === h) {
+      return kValues[i];
+    }
+  }
+  const shape: ProfileShape = profileShape(re, { model, relativeRoughness, extrapolate: true });
+  const k = 1 / chordMeanVelocity(shape, h);
+  kKeys[kNext] = [re, model, relativeRoughness, h];
+  kValues[kNext] = k;
+  kNext = (kNext + 1) % K_SLOTS;
+  return k;
 }
 
 const OUT = new Float64Array(5);
@@ -290,6 +353,79 @@ function memoPathIntegral(
   return MEMO;
 }
 
+/** The quadrature nodes of a path's chords: what does not depend on the axial position. */
+interface ChordGeometry {
+  readonly alpha: number;
+  readonly nTrav: number;
+  readonly h: number;
+  /** Node weight W/2/nTrav, per node of one chord. */
+  readonly wt: Float64Array;
+  /** Travel direction's x component, per traverse. */
+  readonly ex: Float64Array;
+  /** Per traverse and node (index kk·NODES + j): x, 1 − r², 1 − 3r², x² − y², 1 − r⁴. */
+  readonly px: Float64Array;
+  readonly om: Float64Array;
+  readonly q0: Float64Array;
+  readonly q1: Float64Array;
+  readonly q3: Float64Array;
+}
+
+// The last few chord geometries: a ranking scores each position in a few path planes in turn,
+// and the run's error profile keeps one plane; each is worked out once and reused as it is.
+const GEO_SLOTS = 4;
+const geoCache: ChordGeometry[] = [];
+let geoNext = 0;
+
+/** Node geometry of the chords of a path at plane angle alpha (the same numbers each time). */
+function chordGeometry(
+  alpha: number,
+  nTrav: number,
+  h: number,
+  g: number,
+  gamma: number,
+): ChordGeometry {
+  for (const c of geoCache) {
+    if (c.alpha === alpha && c.nTrav === nTrav && c.h === h) return c;
+  }
+  const size = nTrav * NODES;
+  const geo: ChordGeometry = {
+    alpha,
+    nTrav,
+    h,
+    wt: new Float64Array(NODES),
+    ex: new Float64Array(nTrav),
+    px: new Float64Array(size),
+    om: new Float64Array(size),
+    q0: new Float64Array(size),
+    q1: new Float64Array(size),
+    q3: new Float64Array(size),
+  };
+  for (let j = 0; j < NODES; j++) geo.wt[j] = W_NODE[j] / 2 / nTrav;
+  for (let kk = 0; kk < nTrav; kk++) {
+    const beta = alpha - Math.PI / 2 + 2 * kk * gamma; // chord normal angle
+    const nx = Math.cos(beta);
+    const ny = Math.sin(beta);
+    const ex = -ny; // travel direction: normal turned +90°
+    const ey = nx;
+    geo.ex[kk] = ex;
+    for (let j = 0; j < NODES; j++) {
+      const t = T_NODE[j];
+      const px = h * nx + t * g * ex;
+      const py = h * ny + t * g * ey;
+      const r2 = px * px + py * py;
+      const n = kk * NODES + j;
+      geo.px[n] = px;
+      geo.om[n] = 1 - r2;
+      geo.q0[n] = 1 - 3 * r2;
+      geo.q1[n] = px * px - py * py;
+      geo.q3[n] = 1 - r2 * r2;
+    }
+  }
+  geoCache[geoNext] = geo;
+  geoNext = (geoNext + 1) % GEO_SLOTS;
+  return geo;
+}
+
 /**
  * Path means of the five distortion terms (already multiplied out by the transverse cot φ).
  *
@@ -328,12 +464,10 @@ function pathIntegral(
   }
   const a0 = comps[0].amplitude, a1 = comps[1].amplitude, a2 = comps[2].amplitude;
   const a3 = comps[3].amplitude, a4 = comps[4].amplitude;
+  const geo = chordGeometry(alpha, nTrav, h, g, gamma);
+  const WT = geo.wt, OM = geo.om, Q0 = geo.q0, Q1 = geo.q1, PX = geo.px, Q3 = geo.q3;
   for (let kk = 0; kk < nTrav; kk++) {
-    const beta = alpha - Math.PI / 2 + 2 * kk * gamma; // chord normal angle
-    const nx = Math.cos(beta);
-    const ny = Math.sin(beta);
-    const ex = -ny; // travel direction: normal turned +90°
-    const ey = nx;
+    const ex = geo.ex[kk];
     const x0 = xStart + step * kk;
     const e0 = factored && a0 !== 0 ? a0 * Math.exp(-x0 / comps[0].decay) : 0;
     const e1 = factored && a1 !== 0 ? a1 * Math.exp(-x0 / comps[1].decay) : 0;
@@ -341,12 +475,8 @@ function pathIntegral(
     const e3 = factored && a3 !== 0 ? a3 * Math.exp(-x0 / comps[3].decay) : 0;
     const e4 = factored && a4 !== 0 ? a4 * Math.exp(-x0 / comps[4].decay) : 0;
     for (let j = 0; j < NODES; j++) {
-      const t = T_NODE[j];
-      const px = h * nx + t * g * ex;
-      const py = h * ny + t * g * ey;
-      const r2 = px * px + py * py;
-      const om = 1 - r2;
-      const wt = W_NODE[j] / 2 / nTrav;
+      const n = kk * NODES + j;
+      const wt = WT[j], om = OM[n];
       let m0: number, m1: number, m2: number, m3: number, m4: number;
       if (factored) {
         m0 = e0 * DECAY_ALONG[j];
@@ -355,17 +485,19 @@ function pathIntegral(
         m3 = e3 * DECAY_ALONG[3 * NODES + j];
         m4 = e4 * DECAY_ALONG[4 * NODES + j];
       } else {
-        const x = x0 + step * (t + 1) / 2;
+        const x = x0 + step * (T_NODE[j] + 1) / 2;
         m0 = amp(comps[0], x);
         m1 = amp(comps[1], x);
         m2 = amp(comps[2], x);
         m3 = amp(comps[3], x);
         m4 = amp(comps[4], x);
       }
-      OUT[0] += wt * m0 * om * (1 - 3 * r2);
-      OUT[1] += wt * m1 * (px * px - py * py) * om;
-      OUT[2] += wt * m2 * px * om;
-      OUT[3] += wt * m3 * h * (1 - r2 * r2) * cot;
+      // the products in the order of wt·m0·om·(1 − 3r²), wt·m1·(x² − y²)·om, wt·m2·x·om,
+      // wt·m3·h·(1 − r⁴)·cot φ and wt·m4·om·e_x·cot φ, the position-free factors from geo
+      OUT[0] += wt * m0 * om * Q0[n];
+      OUT[1] += wt * m1 * Q1[n] * om;
+      OUT[2] += wt * m2 * PX[n] * om;
+      OUT[3] += wt * m3 * h * Q3[n] * cot;
       OUT[4] += wt * m4 * om * ex * cot;
     }
   }

@@ -5,7 +5,7 @@
  */
 import { InputError, requireFinite } from "../errors.ts";
 import { resolveFitting } from "./fittings.ts";
-import { MODEL_NOTE, profileErrorEstimate } from "./model.ts";
+import { MODEL_NOTE, profileError } from "./model.ts";
 import { MARGINAL_FRACTION, type StraightRunVerdict } from "./straight_run.ts";
 import type { ProfileModel } from "../flow/profile.ts";
 
@@ -127,7 +127,7 @@ export interface RankResult {
  *   keeping the downstream one); when it does not, three quarters of the way along the run
  *   from the upstream fitting (common practice).
  * - Score: each candidate position × path orientation is scored with
- *   {@link profileErrorEstimate} at every Reynolds number given (the worst magnitude counts)
+ *   {@link profileError} (the error of {@link profileErrorEstimate}) at every Reynolds number given (the worst magnitude counts)
  *   plus the downstream fitting's reading shift; smaller is better.
  * - Order (the recommended candidate is the first):
  *   1. downstream filter: when any candidate leaves at least the downstream requirement (W D)
@@ -202,7 +202,7 @@ export function rankPositions(input: RankInput): RankResult {
     for (const o of orients) {
       requireFinite("pathOrientations", o, "rad");
       const errors = res.map((re) =>
-        profileErrorEstimate({
+        profileError({
           distanceDiameters: xUp,
           fitting: up,
           orientation: o - fitOrient,
@@ -211,7 +211,7 @@ export function rankPositions(input: RankInput): RankResult {
           chordOffset: input.chordOffset,
           fluidAngle: input.fluidAngle,
           model: input.model,
-        }).error
+        })
       );
       let worst = errors[0];
       for (const e of errors) if (Math.abs(e) > Math.abs(worst)) worst = e;

@@ -17,6 +17,7 @@ export {
   type LiquidOptions,
   liquidProperties,
   liquids,
+  liquidSoundSpeed,
   type LiquidState,
   liquidVapourPressure,
 } from "./properties.ts";

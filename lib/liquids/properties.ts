@@ -310,6 +310,47 @@ export function liquidProperties(
   p: number = P_ATM,
   options: LiquidOptions = {},
 ): LiquidState {
+  return liquidState(id, T, p, options, true);
+}
+
+/**
+ * Sound speed of a liquid at temperature T and absolute pressure p: the `soundSpeed` of
+ * {@link liquidProperties} with the same checks, warnings and errors (its density and viscosity
+ * are still evaluated and checked), without comparing the other formulations for the spread.
+ * For sweeps that use the sound speed alone.
+ *
+ * Validity, sources and options: as {@link liquidProperties}.
+ *
+ * @param id liquid id: "water", "seawater" or an id of data/liquids.yaml
+ * @param T temperature, K
+ * @param p absolute pressure, Pa (default 101 325)
+ * @param options formulation, salinity, extrapolation opt-in and warnings sink
+ * @returns sound speed, m/s
+ *
+ * @example
+ * ```ts
+ * import { liquidProperties, liquidSoundSpeed } from "./properties.ts";
+ * const c = liquidSoundSpeed("water", 283.15, 5e5);
+ * if (c !== liquidProperties("water", 283.15, 5e5).soundSpeed) throw new Error(String(c));
+ * ```
+ */
+export function liquidSoundSpeed(
+  id: string,
+  T: number,
+  p: number = P_ATM,
+  options: LiquidOptions = {},
+): number {
+  return liquidState(id, T, p, options, false).soundSpeed;
+}
+
+/** {@link liquidProperties}; `spread` false leaves soundSpeedSpread 0 (not compared). */
+function liquidState(
+  id: string,
+  T: number,
+  p: number,
+  options: LiquidOptions,
+  spread: boolean,
+): LiquidState {
   if (!Number.isFinite(T) || T <= 0) {
     throw new InputError("temperature", String(T), "a finite absolute temperature in K above 0");
   }
@@ -331,10 +372,6 @@ export function liquidProperties(
     const c = waterSoundSpeed(T, p, f, opts);
     const rho = waterDensity(T, p, f === "if97" ? "if97" : "iapws95", opts);
     const mu = waterViscosity(T, p, opts);
-    const spread = otherSpread(
-      c,
-      WATER_FORMS.filter((x) => x !== f).map((x) => () => waterSoundSpeed(T, p, x)),
-    );
     out = {
       id,
       name: "Water",
@@ -342,7 +379,12 @@ export function liquidProperties(
       density: rho,
       dynamicViscosity: mu,
       kinematicViscosity: mu / rho,
-      soundSpeedSpread: spread,
+      soundSpeedSpread: spread
+        ? otherSpread(
+          c,
+          WATER_FORMS.filter((x) => x !== f).map((x) => () => waterSoundSpeed(T, p, x)),
+        )
+        : 0,
       trace: [...waterTrace(f), ...waterTrace("viscosity")],
       warnings,
     };
@@ -364,10 +406,6 @@ export function liquidProperties(
     // Below 0 °C (cold seawater stays liquid) pure-water viscosity is extrapolated a little.
     const muW = waterViscosity(T, p, T < 273.15 ? { extrapolate: true, warnings } : opts);
     const mu = seawater.viscosityFromWater(S, T, muW, { extrapolate: T < 273.15, warnings });
-    const spread = otherSpread(
-      c,
-      SEA_FORMS.filter((x) => x !== f).map((x) => () => seawater.soundSpeed(S, T, p, x)),
-    );
     out = {
       id,
       name: `Seawater (S ${S})`,
@@ -375,7 +413,12 @@ export function liquidProperties(
       density: rho,
       dynamicViscosity: mu,
       kinematicViscosity: mu / rho,
-      soundSpeedSpread: spread,
+      soundSpeedSpread: spread
+        ? otherSpread(
+          c,
+          SEA_FORMS.filter((x) => x !== f).map((x) => () => seawater.soundSpeed(S, T, p, x)),
+        )
+        : 0,
       trace: [
         ...seawaterTrace(f),
         trace("salinity (practical)", S, "", "millero-2008", "input"),

@@ -372,14 +372,28 @@ function saturatedLiquidDensityGuess(T: number): number {
 
 const GUESS = new Float64Array(2);
 
+// The last solve's state and root: sound speed, density and viscosity of one state each solve
+// the same (T, p) in a row, and the solve is deterministic, so the root is reused as it is.
+let lastT = NaN, lastP = NaN, lastRho = NaN;
+
 /**
  * Liquid density at (T, p) without range or phase checks. Fast path: Newton iteration on
  * p(T, ρ) − p = 0 from the IF97 region-1 density (within ~1e-5 of the answer, so two or three
  * steps reach 1e-13); if that start is unavailable or a step misbehaves, a bracketed Newton
  * solve from the saturated-liquid side with a bisection fallback. Throws NoPhysicalAnswerError
- * if no liquid root is found.
+ * if no liquid root is found. A call at the (T, p) of the previous successful one returns its
+ * root without solving again (the same number).
  */
 export function iapws95DensityUnchecked(T: number, p: number): number {
+  if (T === lastT && p === lastP) return lastRho;
+  const rho = densitySolve(T, p);
+  lastT = T;
+  lastP = p;
+  lastRho = rho;
+  return rho;
+}
+
+function densitySolve(T: number, p: number): number {
   const k = iapws95Coefficients();
   if (T >= 273.15 && T <= 623.15 && p > 0 && p <= 100e6) {
     if97Region1Unchecked(T, p, GUESS);

@@ -158,13 +158,26 @@ export function if97Region1(T: number, p: number, options?: ValidityOptions): If
   };
 }
 
-/** Speed of sound (m/s) and density (kg/m³) into OUT without checks or allocation. */
+// The last call's state and results: the IAPWS-95 density solve starts from the IF97 density
+// at the (T, p) whose IF97 sound speed a spread check then asks for; the same numbers are reused.
+let lastT = NaN, lastP = NaN, lastW = NaN, lastRho = NaN;
+
+/**
+ * Speed of sound (m/s) and density (kg/m³) into OUT without checks or allocation. A call at
+ * the (T, p) of the previous one writes the previous results again without evaluating.
+ */
 export function if97Region1Unchecked(T: number, p: number, out: Float64Array): void {
-  const k = if97Region1Coefficients();
-  const pi = p / k.pstar, tau = k.Tstar / T;
-  gibbs(pi, tau);
-  const RT = k.R * T;
-  const x = G[1] - tau * G[5];
-  out[0] = Math.sqrt(RT * G[1] * G[1] / (x * x / (tau * tau * G[4]) - G[2]));
-  out[1] = p / (pi * G[1] * RT);
+  if (T !== lastT || p !== lastP) {
+    const k = if97Region1Coefficients();
+    const pi = p / k.pstar, tau = k.Tstar / T;
+    gibbs(pi, tau);
+    const RT = k.R * T;
+    const x = G[1] - tau * G[5];
+    lastW = Math.sqrt(RT * G[1] * G[1] / (x * x / (tau * tau * G[4]) - G[2]));
+    lastRho = p / (pi * G[1] * RT);
+    lastT = T;
+    lastP = p;
+  }
+  out[0] = lastW;
+  out[1] = lastRho;
 }

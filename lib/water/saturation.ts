@@ -46,18 +46,21 @@ export function saturationPressureUnchecked(T: number): number {
   return c.pc * Math.exp((c.Tc / T) * sum);
 }
 
-// p_s at whole kelvins above the triple point (filled on first use), for the fast pass.
+// p_s at whole kelvins above the triple point, for the fast pass: each filled when first asked
+// for (NaN until then), so a process that meets a few temperatures evaluates a few.
 let bounds: Float64Array | undefined;
 
 function saturationBound(T: number): number {
   if (!bounds) {
-    const n = Math.ceil(SATURATION_RANGE[1] - SATURATION_RANGE[0]) + 1;
-    bounds = new Float64Array(n);
-    for (let i = 0; i < n; i++) {
-      bounds[i] = saturationPressureUnchecked(Math.min(SATURATION_RANGE[0] + i, 647.096));
-    }
+    bounds = new Float64Array(Math.ceil(SATURATION_RANGE[1] - SATURATION_RANGE[0]) + 1);
+    bounds.fill(NaN);
   }
-  return bounds[Math.ceil(T - SATURATION_RANGE[0])];
+  const i = Math.ceil(T - SATURATION_RANGE[0]);
+  let b = bounds[i];
+  if (Number.isNaN(b)) {
+    b = bounds[i] = saturationPressureUnchecked(Math.min(SATURATION_RANGE[0] + i, 647.096));
+  }
+  return b;
 }
 
 /**

@@ -12,7 +12,7 @@
 import type { Warning } from "../../errors.ts";
 import type { TraceEntry } from "../../trace.ts";
 import type { Registry } from "../../registry/mod.ts";
-import { liquidProperties } from "../../liquids/mod.ts";
+import { liquidSoundSpeed } from "../../liquids/mod.ts";
 import {
   type ClampOnInputs,
   type ClampOnPath,
@@ -162,6 +162,9 @@ export function planMountings(input: MountingsStageInput): MountingsStage {
   const odHalf = halfWidthTol(rp.tolerances?.outsideDiameter) ??
     PLAN_ASSUMPTIONS.defaultOdRelative * rp.outsideDiameter;
   const budgetWarnings: Warning[] = [];
+  // The liquid's sound speeds over the seasonal range, the same for every mounting: filled by
+  // the first mounting that asks (where a failing evaluation would have thrown before).
+  const seasonal: number[] = [];
   const mountingPlans: (MountingPlan & { path: ClampOnPath; inputs: ClampOnInputs })[] = [];
   for (const n of mountings) {
     const inputs = baseInputs(n);
@@ -186,7 +189,7 @@ export function planMountings(input: MountingsStageInput): MountingsStage {
         return { density: lm.density, attenuation: lm.attenuation };
       }),
     }, { extrapolate: true, warnings: budgetWarnings });
-    const overTemperature = spacingOverTemperature(input, inputs);
+    const overTemperature = spacingOverTemperature(input, inputs, seasonal);
     mountingPlans.push({
       traverses: n,
       name: mountingName(n),
@@ -255,10 +258,13 @@ function windowHalfWidths(
 /**
  * Spacing at seven temperatures across the site's seasonal range (undefined without one): the
  * liquid's sound speed at each (or the stated one), the wedge's by c_w + dc/dT·(T − T_line).
+ * `seasonal` holds the liquid's sound speeds already evaluated (index i), shared by the
+ * mountings of one plan; missing ones are evaluated and stored.
  */
 function spacingOverTemperature(
   input: MountingsStageInput,
   inputs: ClampOnInputs,
+  seasonal: number[],
 ): MountingPlan["overTemperature"] {
   const { fl, cw, dcwdT, T } = input;
   if (!fl.temperatureRange) return undefined;
@@ -266,12 +272,12 @@ function spacingOverTemperature(
   const overTemperature: NonNullable<MountingPlan["overTemperature"]>[number][] = [];
   for (let i = 0; i <= 6; i++) {
     const Ti = min + (max - min) * i / 6;
-    const ci = fl.soundSpeed ?? liquidProperties(fl.liquid, Ti, fl.pressure, {
+    const ci = fl.soundSpeed ?? (seasonal[i] ??= liquidSoundSpeed(fl.liquid, Ti, fl.pressure, {
       salinity: fl.salinity,
       formulation: fl.formulation,
       extrapolate: true,
       warnings: [],
-    }).soundSpeed;
+    }));
     const cwi = cw + dcwdT * (Ti - T);
     const pi = clampOnPath({ ...inputs, fluidSoundSpeed: ci, wedgeSoundSpeed: cwi });
     overTemperature.push({

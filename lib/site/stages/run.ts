@@ -15,7 +15,9 @@ import {
   checkStraightRun,
   type ModelProvenance,
   modelProvenance,
+  profileError,
   profileErrorEstimate,
+  type ProfileErrorInput,
   rankPositions,
   resolveFitting,
 } from "../../installation/mod.ts";
@@ -117,17 +119,16 @@ export function planStraightRun(input: RunStageInput): RunStage {
       downstream: { fitting: downFit.id, distance: run.length - position },
     });
     addTrace(check.trace);
-    const estAt = (x: number) =>
-      profileErrorEstimate({
-        distanceDiameters: x / bore,
-        fitting: upFit.id,
-        orientation,
-        traverses: provisional.traverses,
-        reynolds: designPoint.reynolds,
-        fluidAngle: provisional.fluidAngle,
-        relativeRoughness: rr,
-      });
-    const est = estAt(position);
+    const estInput = (x: number): ProfileErrorInput => ({
+      distanceDiameters: x / bore,
+      fitting: upFit.id,
+      orientation,
+      traverses: provisional.traverses,
+      reynolds: designPoint.reynolds,
+      fluidAngle: provisional.fluidAngle,
+      relativeRoughness: rr,
+    });
+    const est = profileErrorEstimate(estInput(position));
     installHalf = Math.abs(est.error) + est.spread;
     installProvenance = { source: est.source, basis: est.basis };
     const along: { position: number; error: number }[] = [];
@@ -135,7 +136,7 @@ export function planStraightRun(input: RunStageInput): RunStage {
       const x = run.length * i / 40;
       along.push({
         position: x,
-        error: estAt(x).error,
+        error: profileError(estInput(x)),
       });
     }
     tr.push(
