@@ -1,12 +1,15 @@
 /**
  * From bytes or text to a raw value: size limit, binary refusal, YAML (core schema, unique
  * keys, string keys, few aliases, no custom or YAML 1.1 tags, one document) and strict JSON.
- * Syntax errors become one line naming the line and column. npm `yaml` is imported only when a
- * YAML text is parsed: JSON sites (and their duplicate-key check) need none of it.
+ * Syntax errors become one line naming the line and column. A YAML text in the plain subset that
+ * site files are written in is read by our own reader (./yaml_subset.ts), with the same result;
+ * npm `yaml` is imported only for a YAML text outside it (and gives the errors): JSON sites
+ * (and their duplicate-key check) and most YAML sites need none of it.
  *
  * @module
  */
 import { type Ctx, fail, oneLine } from "./read_fields.ts";
+import { readYamlSubset } from "./yaml_subset.ts";
 
 /** Most aliases a site file may expand; site files need few, alias bombs need many. */
 export const MAX_ALIASES = 20;
@@ -73,13 +76,16 @@ function firstSentence(msg: string): string {
 }
 
 /**
- * Parse YAML text strictly into plain data.
+ * Parse YAML text strictly into plain data: by the subset reader when the text is in its subset,
+ * else by the full YAML parser (loaded on first use), which gives the same values and the errors.
  *
  * @param ctx error context
  * @param text the YAML text
  * @returns the data (a promise: the YAML parser is loaded on first use)
  */
 export async function parseYamlText(ctx: Ctx, text: string): Promise<unknown> {
+  const quick = readYamlSubset(text);
+  if (quick) return quick.value;
   const { parseDocument } = await import("yaml");
   const doc = parseDocument(text, {
     schema: "core",

@@ -4,7 +4,7 @@
  *
  * @module
  */
-import { parse as parseYaml } from "yaml";
+import { readYamlSubset } from "./yaml_subset.ts";
 import { InputError } from "../errors.ts";
 import { type Dimension, parseQuantityFull } from "../units.ts";
 import type { FieldReadings, MountingReading } from "./reconcile.ts";
@@ -77,12 +77,21 @@ export async function readReadingsText(text: string, where = "readings"): Promis
   if (text.length > MAX_READINGS_BYTES) {
     throw new InputError(where, "a file over 64 KiB", "a readings file");
   }
-  let raw: unknown;
-  try {
-    raw = parseYaml(text, { maxAliasCount: 10, uniqueKeys: true });
-  } catch (e) {
-    const first = (e as Error).message.split("\n")[0];
-    throw new InputError(where, `text that is neither YAML nor JSON (${first})`, "a readings file");
+  // The plain subset is read by our own reader; anything else by npm yaml, loaded only then.
+  const quick = readYamlSubset(text);
+  let raw: unknown = quick?.value;
+  if (!quick) {
+    const { parse: parseYaml } = await import("yaml");
+    try {
+      raw = parseYaml(text, { maxAliasCount: 10, uniqueKeys: true });
+    } catch (e) {
+      const first = (e as Error).message.split("\n")[0];
+      throw new InputError(
+        where,
+        `text that is neither YAML nor JSON (${first})`,
+        "a readings file",
+      );
+    }
   }
   const body = raw && typeof raw === "object" && "readings" in raw
     ? (raw as { readings: unknown }).readings
