@@ -1,7 +1,9 @@
 /**
  * Propagation of distributions by the Monte Carlo method (JCGM 101:2008 §7): draw the inputs
  * from their distributions, evaluate the model for each draw, and summarise the output draws
- * by their mean, standard deviation and a coverage interval.
+ * by their mean, standard deviation and a coverage interval. Independent inputs are drawn by
+ * a loop written once per pattern of input kinds (./draw_loop.ts); correlated inputs and long
+ * input lists by the generic loop here. Both give the same bits.
  *
  * @module
  */
@@ -16,6 +18,15 @@ import {
 } from "./inputs.ts";
 import type { MeasurementModel } from "./gum.ts";
 import { fillUniformOf, type RandomState, randomState } from "./rng.ts";
+import {
+  drawLoopFor,
+  KIND_FIXED,
+  KIND_NORMAL,
+  KIND_RECT,
+  KIND_TRI,
+  KIND_U,
+  MAX_SPECIALISED_INPUTS,
+} from "./draw_loop.ts";
 
 /** Options of {@link monteCarlo}. */
 export interface MonteCarloOptions {
@@ -58,7 +69,7 @@ export interface MonteCarloResult {
 /** Uniform deviates drawn ahead per block in the draw loop. */
 const UNIFORM_BLOCK = 1024;
 
-const KIND_NORMAL = 0, KIND_RECT = 1, KIND_TRI = 2, KIND_U = 3, KIND_FIXED = 4, KIND_CORR = 5;
+const KIND_CORR = 5;
 
 /**
  * Propagate distributions through a model by Monte Carlo.
@@ -165,7 +176,12 @@ export function monteCarlo(
   const out = new Float64Array(draws);
   const sampler: Sampler = { n, kind, est, scale, group, lower, z, x: new Float64Array(n) };
   // The sum is taken in draw order, as a separate pass over `out` would.
-  const sum = drawAll(model, inputs, sampler, rng, out);
+  // Independent inputs take the loop written for their pattern of kinds (same bits).
+  const sum = group.length === 0 && n <= MAX_SPECIALISED_INPUTS
+    ? drawLoopFor(kind)(model, est, scale, rng.words, rng.spare, out, sampler.x, (y, m, x) => {
+      throw notFinite(inputs, y, m, x);
+    })
+    : drawAll(model, inputs, sampler, rng, out);
 
   // Mean and standard deviation, two passes for accuracy.
   const mean = sum / draws;
@@ -312,19 +328,27 @@ function drawAll(
       x[i] = est[i] + scale[i] * s;
     }
     const y = model(x);
-    if (!Number.isFinite(y)) {
-      throw new NoPhysicalAnswerError(
-        `the model gives ${y} for draw ${m + 1} (inputs ${
-          Array.from(x, (v, i) => `${inputs[i].name} = ${v}`).join(", ")
-        })`,
-      );
-    }
+    if (!Number.isFinite(y)) throw notFinite(inputs, y, m, x);
     out[m] = y;
     sum += y;
   }
   spare[0] = spareValue;
   spare[1] = hasSpare ? 1 : 0;
   return sum;
+}
+
+/** The error for a model value that is not finite at draw m (0-based) with inputs x. */
+function notFinite(
+  inputs: readonly UncertainInput[],
+  y: number,
+  m: number,
+  x: Float64Array,
+): NoPhysicalAnswerError {
+  return new NoPhysicalAnswerError(
+    `the model gives ${y} for draw ${m + 1} (inputs ${
+      Array.from(x, (v, i) => `${inputs[i].name} = ${v}`).join(", ")
+    })`,
+  );
 }
 
 /** Σ (y − mean)², in index order. */
