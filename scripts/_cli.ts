@@ -4,12 +4,12 @@
  *
  * @module
  */
-import { parseArgs, type ParseArgsConfig } from "node:util";
+import { type ArgSpec, ArgumentError, readArgs } from "./_args.ts";
 import { InputError, SnellpathError } from "../lib/errors.ts";
 import { absolutePressureNote, type Dimension, parseQuantity, SI_UNIT } from "../lib/units.ts";
 
-/** Option spec as `node:util` `parseArgs` takes it. */
-export type OptionSpec = NonNullable<ParseArgsConfig["options"]>;
+/** Option spec: type, short letter, whether it repeats, by long name (./_args.ts). */
+export type OptionSpec = ArgSpec;
 
 /** Options every script accepts. */
 export const COMMON_OPTIONS: OptionSpec = {
@@ -35,15 +35,10 @@ export function parseCli(
   let parsed;
   const all = { ...COMMON_OPTIONS, ...options };
   try {
-    parsed = parseArgs({
-      args: joinNegativeValues(args[0] === "--" ? args.slice(1) : args, all),
-      options: all,
-      allowPositionals: true,
-      strict: true,
-    });
+    parsed = readArgs(joinNegativeValues(args[0] === "--" ? args.slice(1) : args, all), all);
   } catch (e) {
-    const msg = e instanceof Error ? e.message.split("\n")[0] : String(e);
-    throw new InputError("arguments", msg.replace(/\.$/, ""), "the options listed by --help");
+    if (!(e instanceof ArgumentError)) throw e;
+    throw new InputError("arguments", e.message, "the options listed by --help");
   }
   if (parsed.values.help) {
     console.log(help.trim());
