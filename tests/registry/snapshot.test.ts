@@ -68,3 +68,23 @@ Deno.test("a tampered file with a source removed is refused even with a snapshot
     (e: unknown) => e instanceof RegistryError && /materials\.yaml/.test((e as Error).message),
   );
 });
+
+Deno.test("snapshot layout 2: the stored content is canonical JSON and its hash is checked", async () => {
+  const { canonicalJson, primeSnapshot } = await import("../../lib/registry/load_snapshot.ts");
+  const text = Deno.readTextFileSync(new URL(SNAPSHOT_FILE, DATA));
+  const head = /^\{"version":2,"rawHash":"[0-9a-f]{64}","hash":"[0-9a-f]{64}","content":/.exec(
+    text,
+  );
+  assert.ok(head, "data/snapshot.json does not start with the layout-2 head");
+  const content = text.slice(head[0].length, text.trimEnd().length - 1);
+  // the content is stored as canonical JSON, so hashing the stored text hashes the data
+  equal(canonicalJson(JSON.parse(content)), content);
+  // a content edited without its hash is not used: the loader validates the YAML in full
+  const dir = copyData();
+  const at = text.indexOf('"value":', head[0].length) + 8;
+  Deno.writeTextFileSync(`${dir}/${SNAPSHOT_FILE}`, text.slice(0, at) + "9" + text.slice(at));
+  ok(!(await primeSnapshot(dir)));
+  const loaded = loadRegistry(dir);
+  ok(!loaded.fromSnapshot);
+  equal(loaded.hash, loadRegistry(DATA).hash);
+});
