@@ -121,12 +121,25 @@ export function canonicalJson(value: unknown): string {
   return s + "}";
 }
 
-function deepFreeze<T>(v: T): T {
-  if (v !== null && typeof v === "object" && !Object.isFrozen(v)) {
-    Object.freeze(v);
-    for (const k of Object.keys(v as object)) deepFreeze((v as Record<string, unknown>)[k]);
+/**
+ * Freeze an object and every object below it (children first; a frozen one is taken as frozen
+ * throughout). The data are trees (JSON or validated YAML), never cyclic.
+ */
+function deepFreeze(v: object): void {
+  if (Array.isArray(v)) {
+    for (let i = 0; i < v.length; i++) {
+      const x = v[i];
+      if (typeof x === "object" && x !== null && !Object.isFrozen(x)) deepFreeze(x);
+    }
+  } else {
+    const o = v as Record<string, unknown>;
+    const keys = Object.keys(o);
+    for (let i = 0; i < keys.length; i++) {
+      const x = o[keys[i]];
+      if (typeof x === "object" && x !== null && !Object.isFrozen(x)) deepFreeze(x);
+    }
   }
-  return v;
+  Object.freeze(v);
 }
 
 /** The YAML files of a data folder, their bytes and the SHA-256 over names and bytes. */
@@ -209,6 +222,8 @@ interface SnapshotContent {
   readonly content: string;
   /** SHA-256 (hex) of `content`: the registry's content hash. */
   readonly hash: string;
+  /** The documents of `content` (frozen), when already parsed. */
+  readonly docs?: DataDoc[];
 }
 
 /**
@@ -218,6 +233,37 @@ interface SnapshotContent {
 const SNAPSHOT_HEAD =
   /^\{"version":(\d+),"rawHash":"([0-9a-f]{64})","hash":"([0-9a-f]{64})","content":/;
 
+/** A snapshot text split at its head. */
+interface SnapshotSplit {
+  /** The content text. */
+  readonly content: string;
+  /** Where it starts and ends in the text. */
+  readonly start: number;
+  readonly end: number;
+  /** The SHA-256 of the YAML bytes it records. */
+  readonly rawHash: string;
+  /** The content hash it records. */
+  readonly recorded: string;
+}
+
+/**
+ * Split a snapshot text into its head and content; undefined when it is of another layout or
+ * version, or is cut short.
+ */
+function snapshotSplit(text: string): SnapshotSplit | undefined {
+  const m = SNAPSHOT_HEAD.exec(text.slice(0, 200));
+  if (!m || Number(m[1]) !== SNAPSHOT_VERSION) return undefined;
+  const end = text.endsWith("}\n") ? text.length - 2 : text.endsWith("}") ? text.length - 1 : -1;
+  if (end <= m[0].length) return undefined;
+  return {
+    content: text.slice(m[0].length, end),
+    start: m[0].length,
+    end,
+    rawHash: m[2],
+    recorded: m[3],
+  };
+}
+
 /**
  * Split a snapshot text whose recorded YAML hash is `rawHash` into its content; undefined when
  * it is of another layout or version, records another YAML hash, or is cut short.
@@ -226,11 +272,8 @@ function snapshotParts(
   text: string,
   rawHash: string,
 ): { content: string; recorded: string } | undefined {
-  const m = SNAPSHOT_HEAD.exec(text.slice(0, 200));
-  if (!m || Number(m[1]) !== SNAPSHOT_VERSION || m[2] !== rawHash) return undefined;
-  const end = text.endsWith("}\n") ? text.length - 2 : text.endsWith("}") ? text.length - 1 : -1;
-  if (end <= m[0].length) return undefined;
-  return { content: text.slice(m[0].length, end), recorded: m[3] };
+  const parts = snapshotSplit(text);
+  return parts?.rawHash === rawHash ? parts : undefined;
 }
 
 function readSnapshotText(dir: URL): string | undefined {
@@ -238,6 +281,29 @@ function readSnapshotText(dir: URL): string | undefined {
     return Deno.readTextFileSync(new URL(SNAPSHOT_FILE, dir));
   } catch {
     return undefined;
+  }
+}
+
+/**
+ * The snapshot's text as {@link readSnapshotText} reads it, and its bytes when they are well-formed
+ * UTF-8 (then the text is their decoding, a byte-order mark kept as a character).
+ */
+function readSnapshotFile(dir: URL): { text: string; bytes?: Uint8Array<ArrayBuffer> } | undefined {
+  let bytes: Uint8Array<ArrayBuffer>;
+  try {
+    bytes = Deno.readFileSync(new URL(SNAPSHOT_FILE, dir));
+  } catch {
+    return undefined;
+  }
+  try {
+    return {
+      text: new TextDecoder("utf-8", { fatal: true, ignoreBOM: true }).decode(bytes),
+      bytes,
+    };
+  } catch {
+    // not UTF-8: read as text, as the synchronous path does
+    const text = readSnapshotText(dir);
+    return text === undefined ? undefined : { text };
   }
 }
 
@@ -250,7 +316,7 @@ function readSnapshot(dir: URL, rawHash: string): SnapshotContent | undefined {
   return hash === parts.recorded ? { content: parts.content, hash } : undefined;
 }
 
-/** The documents of a snapshot's content; undefined when it is not the expected shape. */
+/** The documents of a snapshot's content, frozen; undefined when it is not the expected shape. */
 function snapshotDocs(content: string): DataDoc[] | undefined {
   let pairs: unknown;
   try {
@@ -268,6 +334,7 @@ function snapshotDocs(content: string): DataDoc[] | undefined {
     }
     docs.push({ file: p[0], kind: data.kind, data });
   }
+  for (const d of docs) deepFreeze(d.data);
   return docs;
 }
 
@@ -395,13 +462,26 @@ async function sha256Native(data: Uint8Array<ArrayBuffer>): Promise<string> {
 export async function primeSnapshot(dir: string | URL): Promise<boolean> {
   const base = toDirUrl(dir);
   const { files, bytes, message } = readRaw(base);
-  const read: DataSources = { files, bytes, rawHash: await sha256Native(message) };
-  const text = readSnapshotText(base);
-  const parts = text === undefined ? undefined : snapshotParts(text, read.rawHash);
+  // Each digest runs off the main thread while the main thread reads the snapshot, then parses
+  // its content; the documents are kept only when both digests match.
+  const rawDigest = sha256Native(message);
+  rawDigest.catch(() => {}); // awaited below; a failure surfaces there
+  const file = readSnapshotFile(base);
+  const split = file === undefined ? undefined : snapshotSplit(file.text);
+  const read: DataSources = { files, bytes, rawHash: await rawDigest };
   let snap: SnapshotContent | undefined;
-  if (parts) {
-    const hash = await sha256Native(new TextEncoder().encode(parts.content));
-    if (hash === parts.recorded) snap = { content: parts.content, hash };
+  if (split && split.rawHash === read.rawHash) {
+    // The content's UTF-8 bytes: a slice of the file's (the head and the tail are ASCII).
+    const contentBytes = file!.bytes
+      ? file!.bytes.subarray(split.start, file!.bytes.length - (file!.text.length - split.end))
+      : new TextEncoder().encode(split.content);
+    const contentDigest = sha256Native(contentBytes);
+    contentDigest.catch(() => {});
+    const docs = snapshotDocs(split.content);
+    const hash = await contentDigest;
+    if (hash === split.recorded) {
+      snap = { content: split.content, hash, ...(docs ? { docs } : {}) };
+    }
   }
   primed = { href: base.href, read, snap };
   return snap !== undefined;
@@ -446,12 +526,12 @@ export function loadRegistry(dir: string | URL, options?: LoadOptions): LoadedRe
     : p
     ? p.snap
     : readSnapshot(base, read.rawHash);
-  const fromSnap = snap ? snapshotDocs(snap.content) : undefined;
+  const fromSnap = snap ? snap.docs ?? snapshotDocs(snap.content) : undefined;
   const docs: DataDoc[] = fromSnap ?? needFull()(read.files, sourceTexts(read));
   const sources = collectSources(docs);
   // From the snapshot, the hash is that of the very text the documents were parsed from.
   const hash = fromSnap ? snap!.hash : contentHash(docs);
-  for (const d of docs) deepFreeze(d.data);
+  if (!fromSnap) { for (const d of docs) if (!Object.isFrozen(d.data)) deepFreeze(d.data); }
   return Object.freeze({
     dir: base.href,
     docs: Object.freeze(docs),

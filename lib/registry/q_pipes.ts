@@ -289,6 +289,15 @@ export function normalizeSchedule(s: string): string {
   return t;
 }
 
+/** A standard of the catalogue and every name it answers to; its size index is built on first use. */
+interface StdEntry {
+  readonly file: PipesFile;
+  /** Every name it answers to, normalised. */
+  readonly names: readonly string[];
+  /** The size and schedule index, once built. */
+  index?: StdIndex;
+}
+
 interface StdIndex {
   readonly file: PipesFile;
   readonly info: PipeStandardInfo;
@@ -296,8 +305,6 @@ interface StdIndex {
   readonly rows: readonly { readonly value: number; readonly row: PipesFile["sizes"][number] }[];
   /** Schedule normal form → catalogue key. */
   readonly schedules: ReadonlyMap<string, string>;
-  /** Every name it answers to, normalised. */
-  readonly names: readonly string[];
 }
 
 const BASIS_RANK: Record<Basis, number> = {
@@ -344,15 +351,24 @@ function band(
  * ```
  */
 export function pipeQueries(loaded: LoadedRegistry): PipeQueries {
-  const standards = indexStandards(loaded);
-  const toleranceSets = indexTolerances(loaded);
+  // Built on first use: the standards' names on the first query, a standard's size index when a
+  // query reaches it, the tolerance sets on the first tolerance query (a plan needs one standard).
+  let entries: readonly StdEntry[] | undefined;
+  const standards = () => entries ??= listStandards(loaded);
+  let tolerances: readonly PipeToleranceSet[] | undefined;
+  const toleranceSetsOf = () => tolerances ??= indexTolerances(loaded);
   const records = new Map<string, PipeRecord>();
-  const findStandard = (name: string) => standardIn(standards, name);
-  const record = (std: StdIndex, row: PipesFile["sizes"][number], key: string): PipeRecord => {
+  const findStandard = (name: string) => indexOf(standardIn(standards(), name));
+  const record = (
+    std: StdIndex,
+    row: PipesFile["sizes"][number],
+    value: number,
+    key: string,
+  ): PipeRecord => {
     const id = `${std.file.id}|${row.nps}|${key}`;
     const cached = records.get(id);
     if (cached) return cached;
-    const rec = pipeRecord(std, row, key);
+    const rec = pipeRecord(std, row, value, key);
     records.set(id, rec);
     return rec;
   };
@@ -367,23 +383,26 @@ export function pipeQueries(loaded: LoadedRegistry): PipeQueries {
         throw new InputError("pipe", String(query), "{ standard, nps, schedule }");
       }
       const std = findStandard(query.standard);
-      const { row } = findRow(std, query.nps);
-      return record(std, row, findSchedule(std, row, query.schedule));
+      const { value, row } = findRow(std, query.nps);
+      return record(std, row, value, findSchedule(std, row, query.schedule));
     },
     /** Every catalogue pipe matching a filter (all when none), ordered by standard, size, series. */
     pipes(filter: PipeFilter = {}): PipeRecord[] {
-      const stds = filter.standard !== undefined ? [findStandard(filter.standard)] : standards;
+      const stds = filter.standard !== undefined
+        ? [standardIn(standards(), filter.standard)]
+        : standards();
       const v = filter.nps !== undefined ? parseNominalSize(filter.nps) : undefined;
       const sched = filter.schedule !== undefined ? normalizeSchedule(filter.schedule) : undefined;
       const out: PipeRecord[] = [];
-      for (const std of stds) {
-        if (filter.material !== undefined && std.file.material !== filter.material) continue;
+      for (const e of stds) {
+        if (filter.material !== undefined && e.file.material !== filter.material) continue;
+        const std = indexOf(e);
         for (const { value, row } of std.rows) {
           if (v !== undefined && Math.abs(value - v) > 1e-9) continue;
           for (const key of std.file.series.flat()) {
             if (!(key in row.wallMm)) continue;
             if (sched !== undefined && normalizeSchedule(key) !== sched) continue;
-            out.push(record(std, row, key));
+            out.push(record(std, row, value, key));
           }
         }
       }
@@ -391,7 +410,7 @@ export function pipeQueries(loaded: LoadedRegistry): PipeQueries {
     },
     /** Every standard in the catalogue. */
     pipeStandards(): PipeStandardInfo[] {
-      return standards.map((s) => s.info);
+      return standards().map((s) => indexOf(s).info);
     },
     /** One standard by name, id or alias. */
     pipeStandard(name: string): PipeStandardInfo {
@@ -402,10 +421,11 @@ export function pipeQueries(loaded: LoadedRegistry): PipeQueries {
      * or a material id, in that order of lookup.
      */
     pipeTolerance(standardOrMaterial: string): PipeToleranceSet {
+      const toleranceSets = toleranceSetsOf();
       const byId = toleranceSets.find((t) => t.id === standardOrMaterial);
       if (byId) return byId;
       const n = normStandard(String(standardOrMaterial));
-      const std = standards.find((s) => s.names.includes(n));
+      const std = standards().find((s) => s.names.includes(n));
       if (std) {
         const t = toleranceSets.find((t) => t.standards.includes(std.file.id));
         if (t) return t;
@@ -418,41 +438,49 @@ export function pipeQueries(loaded: LoadedRegistry): PipeQueries {
         nearest(String(standardOrMaterial), [
           ...toleranceSets.map((t) => t.id),
           ...toleranceSets.flatMap((t) => t.materials),
-          ...standards.map((s) => s.info.standard),
+          ...standards().map((s) => s.file.standard),
         ], 6),
       );
     },
   };
 }
 
-/** The pipe standards of the loaded registry, sizes ordered by nominal size. */
-function indexStandards(loaded: LoadedRegistry): StdIndex[] {
-  const standards: StdIndex[] = [];
+/** The pipe standards of the loaded registry, in data-file order, with the names they answer to. */
+function listStandards(loaded: LoadedRegistry): StdEntry[] {
+  const standards: StdEntry[] = [];
   for (const d of loaded.docs) {
     if (d.kind !== "pipes") continue;
     const f = d.data as PipesFile;
-    const rows = f.sizes.map((row) => ({ value: sizeValue(row.nps), row }))
-      .sort((a, b) => a.value - b.value);
-    const schedules = new Map<string, string>();
-    for (const s of f.series.flat()) schedules.set(normalizeSchedule(s), s);
-    const info: PipeStandardInfo = Object.freeze({
-      id: f.id,
-      standard: f.standard,
-      title: f.title,
-      aliases: f.aliases,
-      sizeSystem: f.sizeSystem,
-      material: f.material,
-      source: f.source,
-      basis: f.basis,
-      ...(f.copy ? { copy: f.copy } : {}),
-      series: f.series,
-      sizes: Object.freeze(rows.map((r) => r.row.nps)),
-      ...(f.lining ? { liningMaterial: f.lining.material } : {}),
-    });
-    const names = [f.id, f.standard, ...f.aliases].map(normStandard);
-    standards.push({ file: f, info, rows, schedules, names });
+    standards.push({ file: f, names: [f.id, f.standard, ...f.aliases].map(normStandard) });
   }
   return standards;
+}
+
+/** The size and schedule index of a standard (built once), sizes ordered by nominal size. */
+function indexOf(entry: StdEntry): StdIndex {
+  return entry.index ??= indexStandard(entry.file);
+}
+
+function indexStandard(f: PipesFile): StdIndex {
+  const rows = f.sizes.map((row) => ({ value: sizeValue(row.nps), row }))
+    .sort((a, b) => a.value - b.value);
+  const schedules = new Map<string, string>();
+  for (const s of f.series.flat()) schedules.set(normalizeSchedule(s), s);
+  const info: PipeStandardInfo = Object.freeze({
+    id: f.id,
+    standard: f.standard,
+    title: f.title,
+    aliases: f.aliases,
+    sizeSystem: f.sizeSystem,
+    material: f.material,
+    source: f.source,
+    basis: f.basis,
+    ...(f.copy ? { copy: f.copy } : {}),
+    series: f.series,
+    sizes: Object.freeze(rows.map((r) => r.row.nps)),
+    ...(f.lining ? { liningMaterial: f.lining.material } : {}),
+  });
+  return { file: f, info, rows, schedules };
 }
 
 /** The manufacturing-tolerance sets of the loaded registry, SI. */
@@ -483,7 +511,7 @@ function indexTolerances(loaded: LoadedRegistry): PipeToleranceSet[] {
 }
 
 /** A standard by id, name or alias (a missing ASME/ASTM/AWWA/ANSI prefix tolerated). */
-function standardIn(standards: readonly StdIndex[], name: string): StdIndex {
+function standardIn(standards: readonly StdEntry[], name: string): StdEntry {
   if (typeof name !== "string" || name.trim() === "") {
     throw new InputError(
       "standard",
@@ -498,7 +526,7 @@ function standardIn(standards: readonly StdIndex[], name: string): StdIndex {
     throw new NotFoundError(
       "standard",
       name,
-      nearest(name, standards.flatMap((s) => [s.info.standard, ...s.info.aliases]), 6),
+      nearest(name, standards.flatMap((s) => [s.file.standard, ...s.file.aliases]), 6),
     );
   }
   return hit;
@@ -537,8 +565,13 @@ function findSchedule(
   return key;
 }
 
-/** One catalogue pipe record (SI) with its provenance, frozen. */
-function pipeRecord(std: StdIndex, row: PipesFile["sizes"][number], key: string): PipeRecord {
+/** One catalogue pipe record (SI) with its provenance, frozen; `value` is the row's nominal size. */
+function pipeRecord(
+  std: StdIndex,
+  row: PipesFile["sizes"][number],
+  value: number,
+  key: string,
+): PipeRecord {
   const f = std.file;
   const w = row.wallMm[key];
   const wallMm = typeof w === "number" ? w : w.valueMm;
@@ -555,7 +588,6 @@ function pipeRecord(std: StdIndex, row: PipesFile["sizes"][number], key: string)
         ? { spread: mm((w.spreadMm ?? f.spreadMm)!) }
         : {}),
     };
-  const value = sizeValue(row.nps);
   const rule = f.lining?.rules.find((r) => value >= r.npsMin && value <= r.npsMax);
   const lining: PipeLiningRecord | undefined = f.lining && rule
     ? Object.freeze({
