@@ -22,7 +22,9 @@ Options:
   -h, --help   this help
 
 Times each command as a child process from spawn to exit. The baseline is 'deno eval 0' with the
-same flags. A command whose script does not exist yet is skipped with a notice.
+same flags. A command whose script does not exist yet is skipped with a notice. The last case is
+the command 'deno task plan' runs, read from each checkout's deno.json (ours runs the bundle in
+scripts/bundled/ with eager compilation; an older checkout may run scripts/plan.ts).
 `;
 
 const FLAGS = ["--ignore-env=LOG_TOKENS,LOG_STREAM", "--allow-read=."];
@@ -38,6 +40,11 @@ interface Case {
   cwd?: string;
   /** Index of the case this one is the baseline of. */
   baselineOf?: number;
+  /**
+   * A deno task: the command is that task's `deno …` line from deno.json in the working folder
+   * (the baseline's own deno.json for its twin), then `args`.
+   */
+  task?: string;
 }
 
 const CASES: Case[] = [
@@ -67,7 +74,31 @@ const CASES: Case[] = [
       "json",
     ],
   },
+  {
+    name: "deno task plan's command, one site, --format json",
+    script: "scripts/plan.ts",
+    goal: 4,
+    task: "plan",
+    args: ["data/demo/01-reservoir-outlet.yaml", "--format", "json"],
+  },
 ];
+
+/**
+ * The `deno …` command of a task in a checkout's deno.json, without the leading `deno`.
+ *
+ * @param dir the checkout ("." for this one)
+ * @param task the task name
+ * @returns the command's arguments
+ */
+function taskArgs(dir: string, task: string): string[] {
+  const json = JSON.parse(Deno.readTextFileSync(`${dir}/deno.json`));
+  const line = json?.tasks?.[task];
+  const cmd = typeof line === "string" ? line : line?.command;
+  if (typeof cmd !== "string" || !cmd.startsWith("deno ") || /["'|&;<>$]/.test(cmd)) {
+    throw new InputError(`task ${task} in ${dir}/deno.json`, String(cmd), "a plain deno command");
+  }
+  return cmd.split(/\s+/).slice(1);
+}
 
 function median(xs: number[]): number {
   const s = [...xs].sort((a, b) => a - b);
@@ -122,8 +153,17 @@ runMain(async () => {
         notices.push(`${baseline}/${c.script} not found: no baseline for "${c.name}"`);
         continue;
       }
-      cases.push({ name: `${c.name} [baseline]`, args: c.args, cwd: baseline, baselineOf: i });
+      cases.push({
+        ...c,
+        name: `${c.name} [baseline]`,
+        goal: undefined,
+        cwd: baseline,
+        baselineOf: i,
+      });
     }
+  }
+  for (const c of cases) {
+    if (c.task) c.args = [...taskArgs(c.cwd ?? ".", c.task), ...c.args];
   }
   // One warm-up each (module cache, type-check cache), then runs taken in turn.
   for (const c of cases) {

@@ -9,7 +9,7 @@ import { defaultRegistry, type Registry } from "../lib/registry/mod.ts";
 import { readSiteFile, readSitesCsvText, siteFiles, streamSitesCsv } from "../lib/site/read.ts";
 import type { SiteInput } from "../lib/site/schema.ts";
 import { planSite } from "../lib/site/plan.ts";
-import { type FieldReadings, reconcile } from "../lib/site/reconcile.ts";
+import type { FieldReadings } from "../lib/site/reconcile.ts";
 import { fleetCsv, fleetHtml, fleetRow } from "../lib/report/plan_report.ts";
 import {
   type Format,
@@ -146,8 +146,14 @@ class WorkerPool {
     options: JobOptions,
     readonly finish: (item: Item, result: JobResult | undefined) => Promise<void>,
   ) {
+    // From source the worker is _plan_worker.ts; from the bundle (scripts/bundled/, made by
+    // `deno task bundle`) it is the bundled _plan_worker.js beside this file.
+    const worker = new URL(
+      import.meta.url.endsWith(".js") ? "./_plan_worker.js" : "./_plan_worker.ts",
+      import.meta.url,
+    );
     for (let i = 0; i < n; i++) {
-      const w = new Worker(new URL("./_plan_worker.ts", import.meta.url), { type: "module" });
+      const w = new Worker(worker, { type: "module" });
       w.postMessage({ kind: "options", options } satisfies ToWorker);
       w.onmessage = (ev: MessageEvent<FromWorker>) => this.#answer(i, ev.data);
       w.onerror = (ev) => {
@@ -325,6 +331,7 @@ async function reconcileRun(
   }
   const site = await readSiteFile(sources[0].path);
   const readings = await readReadings(opts.readings!);
+  const { reconcile } = await import("../lib/site/reconcile.ts");
   const r = reconcile(site, readings, { registry: reg });
   const { RECONCILE_FORMATS, reconcileReport } = await import(
     "../lib/report/reconcile_report.ts"
