@@ -131,7 +131,10 @@ export interface SiteTransducer {
 export interface SiteFitting {
   /** Fitting id, for example `elbow-90`. */
   fitting: string;
-  /** Angle of the fitting's plane to the beam plane, rad. */
+  /**
+   * Angle of the fitting's plane, rad: to the beam plane when the position is planned; from the
+   * vertical (the reference of the path planes the plan ranks) otherwise.
+   */
   orientation?: number;
 }
 

@@ -9,7 +9,7 @@ scope.onmessage = (ev) => {
   if (ready.handle) ready.handle(ev.data);
   else queued.push(ev.data);
 };
-var { handleMessage } = await import("./_worker-7CZ2CG4Z.js");
+var { handleMessage } = await import("./_worker-AH2Z7CV4.js");
 var reply = (a) => scope.postMessage(a);
 ready.handle = (m) => handleMessage(m, reply);
 for (const m of queued.splice(0)) ready.handle(m);

@@ -8,7 +8,7 @@ import {
   fleetRow,
   planJob,
   render
-} from "./chunk-GDNKHNPS.js";
+} from "./chunk-CEH26QKE.js";
 import {
   readYamlSubset
 } from "./chunk-LUD6BIRI.js";
@@ -17,7 +17,7 @@ import {
   defaultStandard,
   editDistance,
   planSite
-} from "./chunk-4J523DUR.js";
+} from "./chunk-KAJG7CWB.js";
 import "./chunk-MPDMAC6Y.js";
 import "./chunk-TOTFOTVM.js";
 import {
@@ -2051,7 +2051,7 @@ async function reconcileRun(sources, opts, reg) {
   }
   const site = await readSiteFile(sources[0].path);
   const readings = await readReadings(opts.readings);
-  const { reconcile } = await import("./reconcile-DOYDBQBR.js");
+  const { reconcile } = await import("./reconcile-C45UEKEU.js");
   const r = reconcile(site, readings, {
     registry: reg
   });

@@ -12,6 +12,7 @@ import { planLiquid } from "../../lib/site/stages/liquid.ts";
 import { planTransducer } from "../../lib/site/stages/transducer.ts";
 import { planOperatingPoints } from "../../lib/site/stages/points.ts";
 import { planStraightRun } from "../../lib/site/stages/run.ts";
+import { profileErrorEstimate } from "../../lib/installation/mod.ts";
 import { planMountings } from "../../lib/site/stages/mountings.ts";
 import { fmtMm, halfWidthTol, mountingName } from "../../lib/site/stages/assumptions.ts";
 
@@ -162,6 +163,49 @@ Deno.test("run stage: after a 90° elbow, 10 D up and 5 D down meets (common pra
     fluidAngle: 0.3,
   });
   assert.equal(none.warnings[0].code, "no-run");
+});
+
+Deno.test("run stage: the recommended plane's estimate uses its angle to the fitting's plane", async () => {
+  // The distorted-profile model depends on the angle between the path plane and the upstream
+  // fitting's plane (lib/installation, rankPositions scores candidates by o − orientation); the
+  // plan's estimate at the recommended plane must be that candidate's, whatever the fitting's
+  // own orientation. Differences of angles: geometry, no outside source needed.
+  const site = await readSiteText(BASE);
+  const D = 0.2;
+  const points = planOperatingPoints({
+    flow: site.flow,
+    bore: D,
+    area: Math.PI / 4 * D * D,
+    roughness: 0,
+    nu: 1e-6,
+  }).points;
+  const design = points.find((p) => p.label === "design")!;
+  for (const theta of [0, 0.5, -1.1]) {
+    const run = {
+      length: 12 * D,
+      upstream: { fitting: "elbow-90", orientation: theta },
+      downstream: { fitting: "gate-valve" },
+    };
+    const s = planStraightRun({
+      run: run as unknown as NonNullable<typeof site.run>,
+      bore: D,
+      relativeRoughness: 0,
+      points,
+      traverses: 2,
+      fluidAngle: 0.3,
+    }).straightRun!;
+    const expected = profileErrorEstimate({
+      distanceDiameters: s.position / D,
+      fitting: "elbow-90",
+      orientation: s.recommendedOrientation - theta,
+      traverses: 2,
+      reynolds: design.reynolds,
+      fluidAngle: 0.3,
+      relativeRoughness: 0,
+    });
+    closeAbs(s.estimatedProfileError, expected.error, 1e-15, `fitting plane at ${theta} rad`);
+    closeAbs(s.estimatedProfileErrorSpread, expected.spread, 1e-15);
+  }
 });
 
 Deno.test("mountings stage: Snell's law in the liquid, Δt doubles from Z to V", async () => {

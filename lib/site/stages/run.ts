@@ -110,9 +110,12 @@ export function planStraightRun(input: RunStageInput): RunStage {
       fluidAngle: provisional.fluidAngle,
     });
     const position = run.plannedPosition ?? rank.recommendedPosition;
+    // The model takes the angle between the path plane and the fitting's plane. A ranked
+    // position uses the recommended plane, scored by rankPositions as (plane − fitting's
+    // orientation); a planned position keeps the site's angle as given.
     const orientation = run.plannedPosition !== undefined
       ? run.upstream.orientation ?? 0
-      : rank.recommendedOrientation;
+      : rank.recommendedOrientation - (run.upstream.orientation ?? 0);
     const check = checkStraightRun({
       diameter: bore,
       upstream: { fitting: upFit.id, distance: position },

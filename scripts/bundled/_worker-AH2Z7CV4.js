@@ -6,8 +6,8 @@ import {
   handleMessage,
   planJob,
   render
-} from "./chunk-GDNKHNPS.js";
-import "./chunk-4J523DUR.js";
+} from "./chunk-CEH26QKE.js";
+import "./chunk-KAJG7CWB.js";
 import "./chunk-MPDMAC6Y.js";
 import "./chunk-TOTFOTVM.js";
 import "./chunk-ETEOJQ4E.js";

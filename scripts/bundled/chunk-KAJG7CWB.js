@@ -4176,7 +4176,7 @@ function planStraightRun(input) {
       fluidAngle: provisional.fluidAngle
     });
     const position = run.plannedPosition ?? rank.recommendedPosition;
-    const orientation = run.plannedPosition !== void 0 ? run.upstream.orientation ?? 0 : rank.recommendedOrientation;
+    const orientation = run.plannedPosition !== void 0 ? run.upstream.orientation ?? 0 : rank.recommendedOrientation - (run.upstream.orientation ?? 0);
     const check = checkStraightRun({
       diameter: bore,
       upstream: {

@@ -9,7 +9,7 @@ import {
   planSite,
   profileFactor,
   trace
-} from "./chunk-4J523DUR.js";
+} from "./chunk-KAJG7CWB.js";
 import "./chunk-MPDMAC6Y.js";
 import {
   InputError

@@ -4,7 +4,7 @@
 import {
   defaultRegistry,
   planSite
-} from "./chunk-4J523DUR.js";
+} from "./chunk-KAJG7CWB.js";
 import {
   csvTable,
   displayUnit,
