@@ -4,6 +4,7 @@
  * @module
  */
 import assert from "node:assert/strict";
+import { InputError } from "../lib/errors.ts";
 export { assert };
 /** Strict equality. */
 export const equal: typeof assert.equal = assert.equal;
@@ -57,4 +58,20 @@ export function closeAbs(actual: number, expected: number, absTol: number, what 
       Math.abs(actual - expected)
     } > ${absTol}`,
   );
+}
+
+/**
+ * The InputError a promise rejects with; fails when it resolves or rejects with something else.
+ *
+ * @param p the promise
+ * @returns the error, for checks on its message
+ */
+export async function refusal(p: Promise<unknown>): Promise<InputError> {
+  try {
+    await p;
+  } catch (e) {
+    if (e instanceof InputError) return e;
+    throw e;
+  }
+  throw new Error("accepted, expected a refusal");
 }

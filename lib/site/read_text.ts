@@ -76,6 +76,22 @@ function firstSentence(msg: string): string {
 }
 
 /**
+ * Options of npm `yaml` for site and readings text beyond our subset: YAML 1.2 core schema,
+ * unique string keys, no merge keys, strict (pass `customTags: []` beside them: no custom tags).
+ */
+export const YAML_OPTIONS = Object.freeze(
+  {
+    schema: "core",
+    uniqueKeys: true,
+    stringKeys: true,
+    merge: false,
+    resolveKnownTags: false,
+    strict: true,
+    prettyErrors: true,
+  } as const,
+);
+
+/**
  * Parse YAML text strictly into plain data: by the subset reader when the text is in its subset,
  * else by the full YAML parser (loaded on first use), which gives the same values and the errors.
  *
@@ -87,16 +103,7 @@ export async function parseYamlText(ctx: Ctx, text: string): Promise<unknown> {
   const quick = readYamlSubset(text);
   if (quick) return quick.value;
   const { parseDocument } = await import("yaml");
-  const doc = parseDocument(text, {
-    schema: "core",
-    uniqueKeys: true,
-    stringKeys: true,
-    merge: false,
-    resolveKnownTags: false,
-    strict: true,
-    prettyErrors: true,
-    customTags: [],
-  });
+  const doc = parseDocument(text, { ...YAML_OPTIONS, customTags: [] });
   const problem = doc.errors[0] ?? doc.warnings[0];
   if (problem) {
     const pos = problem.linePos?.[0] ?? lineCol(text, problem.pos[0]);

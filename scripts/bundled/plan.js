@@ -1379,18 +1379,21 @@ function lineCol(text2, pos) {
 function firstSentence(msg) {
   return oneLine(msg.split("\n")[0].replace(/ at line \d+, column \d+:?$/, "").replace(/:$/, ""));
 }
+var YAML_OPTIONS = Object.freeze({
+  schema: "core",
+  uniqueKeys: true,
+  stringKeys: true,
+  merge: false,
+  resolveKnownTags: false,
+  strict: true,
+  prettyErrors: true
+});
 async function parseYamlText(ctx, text2) {
   const quick = readYamlSubset(text2);
   if (quick) return quick.value;
   const { parseDocument } = await import("yaml");
   const doc = parseDocument(text2, {
-    schema: "core",
-    uniqueKeys: true,
-    stringKeys: true,
-    merge: false,
-    resolveKnownTags: false,
-    strict: true,
-    prettyErrors: true,
+    ...YAML_OPTIONS,
     customTags: []
   });
   const problem = doc.errors[0] ?? doc.warnings[0];

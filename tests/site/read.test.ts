@@ -2,7 +2,6 @@
  * The site reader on good input: the full shape, JSON, measured pipes, velocities, defaults,
  * unit conversions, expressions, fleets in CSV, folder listing. Sites here are invented.
  */
-import { InputError } from "../../lib/errors.ts";
 import {
   readSiteFile,
   readSitesCsv,
@@ -11,7 +10,7 @@ import {
   siteFiles,
 } from "../../lib/site/read.ts";
 import { SiteInputSchema } from "../../lib/site/schema.ts";
-import { assert, closeRel } from "../_assert.ts";
+import { assert, closeRel, refusal } from "../_assert.ts";
 
 const FULL = `
 name: Filter outlet (invented test site)
@@ -57,17 +56,6 @@ notes: |
 `;
 
 const DEG = Math.PI / 180;
-
-/** The InputError a promise rejects with. */
-async function refusal(p: Promise<unknown>): Promise<InputError> {
-  try {
-    await p;
-  } catch (e) {
-    if (e instanceof InputError) return e;
-    throw e;
-  }
-  throw new Error("accepted, expected a refusal");
-}
 
 Deno.test("full shape: every key read into SI", async () => {
   const s = await readSiteText(FULL, { file: "full.yaml" });

@@ -10,18 +10,7 @@
 import { InputError } from "../../lib/errors.ts";
 import { MAX_SITE_BYTES } from "../../lib/site/schema.ts";
 import { readSiteFile, readSiteText, SiteInputError } from "../../lib/site/read.ts";
-import { assert } from "../_assert.ts";
-
-/** The InputError a promise rejects with (fails when it resolves or throws something else). */
-async function refusal(p: Promise<unknown>): Promise<InputError> {
-  try {
-    await p;
-  } catch (e) {
-    if (e instanceof InputError) return e;
-    throw e;
-  }
-  throw new Error("accepted, expected a refusal");
-}
+import { assert, refusal } from "../_assert.ts";
 
 const BAD = new URL("./bad/", import.meta.url);
 /** Temporary folder holding the cases under their real names; removed by the last test. */

@@ -127,6 +127,32 @@ Deno.test("points stage: Re = VD/ν and a turbulent profile factor V_mean/V_path
   closeRel(s.points[1].frictionFactor, 0.0158, 0.03);
 });
 
+/** Operating points of a site's flows in a smooth bore of diameter d, water-like ν = 1e-6 m²/s. */
+function smoothPoints(
+  site: { flow: Parameters<typeof planOperatingPoints>[0]["flow"] },
+  d: number,
+) {
+  return planOperatingPoints({
+    flow: site.flow,
+    bore: d,
+    area: Math.PI / 4 * d * d,
+    roughness: 0,
+    nu: 1e-6,
+  }).points;
+}
+
+/** The run stage in a smooth bore of diameter d for a V path at 0.3 rad in the liquid. */
+function smoothRun(run: unknown, d: number, points: ReturnType<typeof smoothPoints>) {
+  return planStraightRun({
+    run: run as Parameters<typeof planStraightRun>[0]["run"],
+    bore: d,
+    relativeRoughness: 0,
+    points,
+    traverses: 2,
+    fluidAngle: 0.3,
+  });
+}
+
 Deno.test("run stage: after a 90° elbow, 10 D up and 5 D down meets (common practice)", async () => {
   const site = await readSiteText(BASE);
   const D = 0.2;
@@ -136,21 +162,8 @@ Deno.test("run stage: after a 90° elbow, 10 D up and 5 D down meets (common pra
     downstream: { fitting: "gate-valve" },
     plannedPosition: 10 * D,
   };
-  const points = planOperatingPoints({
-    flow: site.flow,
-    bore: D,
-    area: Math.PI / 4 * D * D,
-    roughness: 0,
-    nu: 1e-6,
-  }).points;
-  const s = planStraightRun({
-    run: run as unknown as NonNullable<typeof site.run>,
-    bore: D,
-    relativeRoughness: 0,
-    points,
-    traverses: 2,
-    fluidAngle: 0.3,
-  });
+  const points = smoothPoints(site, D);
+  const s = smoothRun(run, D, points);
   assert.equal(s.straightRun!.verdict, "meets");
   closeAbs(s.straightRun!.upstreamDiameters, 10, 1e-9);
   assert.ok(s.installHalf >= 0);
@@ -172,13 +185,7 @@ Deno.test("run stage: the recommended plane's estimate uses its angle to the fit
   // own orientation. Differences of angles: geometry, no outside source needed.
   const site = await readSiteText(BASE);
   const D = 0.2;
-  const points = planOperatingPoints({
-    flow: site.flow,
-    bore: D,
-    area: Math.PI / 4 * D * D,
-    roughness: 0,
-    nu: 1e-6,
-  }).points;
+  const points = smoothPoints(site, D);
   const design = points.find((p) => p.label === "design")!;
   for (const theta of [0, 0.5, -1.1]) {
     const run = {
@@ -186,14 +193,7 @@ Deno.test("run stage: the recommended plane's estimate uses its angle to the fit
       upstream: { fitting: "elbow-90", orientation: theta },
       downstream: { fitting: "gate-valve" },
     };
-    const s = planStraightRun({
-      run: run as unknown as NonNullable<typeof site.run>,
-      bore: D,
-      relativeRoughness: 0,
-      points,
-      traverses: 2,
-      fluidAngle: 0.3,
-    }).straightRun!;
+    const s = smoothRun(run, D, points).straightRun!;
     const expected = profileErrorEstimate({
       distanceDiameters: s.position / D,
       fitting: "elbow-90",

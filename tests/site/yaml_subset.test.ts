@@ -10,10 +10,9 @@
  */
 import fc from "fast-check";
 import { parse, parseDocument } from "yaml";
-import { assert } from "../_assert.ts";
-import { InputError } from "../../lib/errors.ts";
+import { assert, refusal } from "../_assert.ts";
 import { readYamlSubset } from "../../lib/site/yaml_subset.ts";
-import { parseYamlText } from "../../lib/site/read_text.ts";
+import { parseYamlText, YAML_OPTIONS } from "../../lib/site/read_text.ts";
 import { readReadingsText } from "../../lib/site/reconcile_read.ts";
 import { demoSiteFiles, mutatedSites } from "../fuzz/_site_mutations.ts";
 
@@ -23,16 +22,7 @@ const FUZZ_CASES = 10_000; // and its default count
 
 /** npm yaml with the site reader's options (lib/site/read_text.ts). */
 function viaYaml(text: string): { ok: true; value: unknown } | { ok: false; why: string } {
-  const doc = parseDocument(text, {
-    schema: "core",
-    uniqueKeys: true,
-    stringKeys: true,
-    merge: false,
-    resolveKnownTags: false,
-    strict: true,
-    prettyErrors: true,
-    customTags: [],
-  });
+  const doc = parseDocument(text, { ...YAML_OPTIONS, customTags: [] });
   const problem = doc.errors[0] ?? doc.warnings[0];
   if (problem) return { ok: false, why: problem.code };
   try {
@@ -454,17 +444,6 @@ Deno.test("yaml subset: the demo sites and the docs' site examples need no fallb
     assert.ok(check(f.text, f.name, tally), `${f.name} is left to the full YAML parser`);
   }
 });
-
-/** The InputError a promise rejects with. */
-async function refusal(p: Promise<unknown>): Promise<InputError> {
-  try {
-    await p;
-  } catch (e) {
-    if (e instanceof InputError) return e;
-    throw e;
-  }
-  throw new Error("accepted, expected a refusal");
-}
 
 Deno.test("yaml subset: deferred texts keep the full parser's messages", async () => {
   const ctx = { file: "site.yaml" };
